@@ -1,0 +1,1 @@
+"""Streaming readers for parallel corpora (plain pair, TSV, TMX, gettext PO/MO) and corpus cleaning."""

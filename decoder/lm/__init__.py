@@ -1,0 +1,1 @@
+"""Target-side n-gram language model: interpolated modified Kneser-Ney, ARPA input/output, compact queries."""

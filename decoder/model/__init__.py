@@ -1,0 +1,1 @@
+"""Model directory: manifest.json plus memory-mappable .npy arrays with checksums."""

@@ -1,0 +1,1 @@
+"""Phrase pairs: extraction from aligned corpora, counting, scoring, lexicalized reordering."""

@@ -1,0 +1,1 @@
+"""Text processing: normalisation, tokenization, placeholder protection, casing, detokenization."""

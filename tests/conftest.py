@@ -1,0 +1,1 @@
+"""Shared fixtures. Module-specific fixtures live in the test modules that use them."""
