@@ -1,0 +1,117 @@
+"""Array layout shared by the IBM Model 1 and HMM E-steps: every (source word, target word) cell of a shard.
+
+For alignment the *source* side is the conditioning side (it gets the NULL word) and the *target* side is the
+generated one; the reverse direction simply swaps the two sides of the corpus.
+
+Sentence pairs of a shard are grouped by their exact shape (source length I, target length J). A bucket of B pairs
+of one shape holds the row numbers, in the lexical table, of all B * J * (I + N) cells, where N = 1 when the NULL
+word is modelled (column 0) and 0 otherwise. With that layout an E-step is a few dense numpy operations per
+bucket and one ``np.bincount`` per shard, and the HMM's forward-backward runs on whole buckets at once.
+
+Memory: 4 bytes per cell, i.e. ``4 * J * (I + 1)`` bytes per sentence pair (about 1.3 KB for 16 x 20 tokens), kept
+in ``.npy`` files in a work folder and memory-mapped by whichever worker runs the shard, so resident memory is
+bounded by what the operating system caches, not by corpus size.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+from pathlib import Path
+
+import numpy as np
+import numpy.typing as npt
+
+from decoder.segment_arrays import ParallelArrays, SegmentArray
+from decoder.vocabulary import NULL_ID
+
+
+@dataclass(frozen=True, slots=True)
+class Bucket:
+    """Pairs of one shape. Cells ``cells[start:start + B*J*C]`` reshape to (B, J, C) with C = I + num_null."""
+
+    source_length: int
+    target_length: int
+    start: int
+    pair_indices: npt.NDArray[np.int64]  # positions of the pairs in the shard
+
+    @property
+    def num_pairs(self) -> int:
+        return len(self.pair_indices)
+
+
+@dataclass(frozen=True, slots=True)
+class ShardLayout:
+    """One shard's cells on disk plus the bucket directory (small, picklable)."""
+
+    cells_path: str
+    num_cells: int
+    num_pairs: int
+    num_null: int
+    buckets: tuple[Bucket, ...]
+
+    def load_cells(self) -> npt.NDArray[np.int32]:
+        return np.load(self.cells_path, mmap_mode="r")
+
+    def bucket_cells(self, cells: npt.NDArray[np.int32], bucket: Bucket) -> npt.NDArray[np.int32]:
+        width = bucket.source_length + self.num_null
+        size = bucket.num_pairs * bucket.target_length * width
+        return cells[bucket.start:bucket.start + size].reshape(bucket.num_pairs, bucket.target_length, width)
+
+
+def _padded_rows(segments: SegmentArray, pair_indices: npt.NDArray[np.int64], length: int) -> npt.NDArray[np.int64]:
+    """(B, length) matrix of the ids of the given segments (all of that length)."""
+    starts = segments.offsets[pair_indices]
+    return segments.ids[starts[:, None] + np.arange(length)].astype(np.int64)
+
+
+def _shape_groups(corpus: ParallelArrays) -> list[tuple[int, int, npt.NDArray[np.int64]]]:
+    """(I, J, pair indices) for every shape present, pairs with an empty side left out."""
+    source_lengths, target_lengths = corpus.source.lengths, corpus.target.lengths
+    usable = np.flatnonzero((source_lengths > 0) & (target_lengths > 0))
+    order = usable[np.lexsort((target_lengths[usable], source_lengths[usable]))]
+    if len(order) == 0:
+        return []
+    shape_keys = source_lengths[order] * (1 << 20) + target_lengths[order]
+    cuts = np.flatnonzero(np.diff(shape_keys)) + 1
+    groups = []
+    for members in np.split(order, cuts):
+        groups.append((int(source_lengths[members[0]]), int(target_lengths[members[0]]), members))
+    return groups
+
+
+def bucket_keys(
+    source_ids: npt.NDArray[np.int64], target_ids: npt.NDArray[np.int64], num_target_words: int, num_null: int,
+) -> npt.NDArray[np.int64]:
+    """Table keys ``source * V_target + target`` of one bucket, shape (B, J, I + num_null)."""
+    if num_null:
+        null_column = np.full((len(source_ids), 1), NULL_ID, dtype=np.int64)
+        source_ids = np.concatenate([null_column, source_ids], axis=1)
+    return source_ids[:, None, :] * num_target_words + target_ids[:, :, None]
+
+
+def _iterate_bucket_keys(corpus: ParallelArrays, num_target_words: int, num_null: int):
+    for source_length, target_length, members in _shape_groups(corpus):
+        source_ids = _padded_rows(corpus.source, members, source_length)
+        target_ids = _padded_rows(corpus.target, members, target_length)
+        yield source_length, target_length, members, bucket_keys(source_ids, target_ids, num_target_words, num_null)
+
+
+def cooccurring_keys(corpus: ParallelArrays, num_target_words: int, num_null: int) -> npt.NDArray[np.int64]:
+    """Sorted unique table keys of every cell of the shard (the map step of building the table)."""
+    parts = [np.unique(keys) for *_, keys in _iterate_bucket_keys(corpus, num_target_words, num_null)]
+    return np.unique(np.concatenate(parts)) if parts else np.zeros(0, dtype=np.int64)
+
+
+def build_layout(
+    corpus: ParallelArrays, table_keys: npt.NDArray[np.int64], num_target_words: int, num_null: int, cells_path: Path,
+) -> ShardLayout:
+    """Look every cell of the shard up in the sorted ``table_keys`` and write the cells to ``cells_path``."""
+    chunks, buckets, start = [], [], 0
+    for source_length, target_length, members, keys in _iterate_bucket_keys(corpus, num_target_words, num_null):
+        rows = np.searchsorted(table_keys, keys.ravel()).astype(np.int32)
+        chunks.append(rows)
+        buckets.append(Bucket(source_length, target_length, start, members))
+        start += len(rows)
+    cells = np.concatenate(chunks) if chunks else np.zeros(0, dtype=np.int32)
+    np.save(cells_path, cells)
+    return ShardLayout(str(cells_path), len(cells), len(corpus), num_null, tuple(buckets))
