@@ -36,17 +36,17 @@ class ExpectedCounts:
 def model1_expected_counts(job: ShardJob) -> ExpectedCounts:
     """E-step of Model 1 over one shard: expected link counts per table key and the shard's log-likelihood."""
     layout = job.layout
-    probabilities = np.load(job.parameters_path, mmap_mode="r")
+    probabilities = np.load(job.parameters_path)  # small and gathered from at random: keep it in memory
     cells = layout.load_cells()
     posteriors = np.empty(layout.num_cells, dtype=np.float64)
     log_likelihood, num_tokens = 0.0, 0
     for bucket in layout.buckets:
         bucket_cells = layout.bucket_cells(cells, bucket)
         width = bucket_cells.shape[2]
-        values = probabilities[bucket_cells.reshape(-1, width)]
+        values = probabilities.take(bucket_cells.reshape(-1, width))
         totals = values.sum(axis=1)
-        size = values.size
-        posteriors[bucket.start:bucket.start + size] = (values / totals[:, None]).ravel()
+        out = posteriors[bucket.start:bucket.start + values.size].reshape(values.shape)
+        np.divide(values, totals[:, None], out=out)
         # log p(e | f) = sum_j log sum_i t(e_j | f_i) - J log(I + 1)
         log_likelihood += float(np.log(totals).sum()) - totals.size * np.log(width)
         num_tokens += totals.size
