@@ -1,0 +1,156 @@
+"""Generate the demo parallel corpus: help-centre articles and UI strings of the fictional app Brelqua, en -> es.
+
+Usage: ``python demo_models/generate_corpus.py [--out DIR] [--seed N]``. Writes ``train``, ``dev`` and
+``test`` as ``.en``/``.es`` files (UTF-8, one segment per line, line-aligned) and ``STATS.txt`` into DIR
+(default: ``demo_models/corpus`` next to this script). The same seed always gives byte-identical files.
+
+Segments come from a grammar of our own (``scenario_*.py``): templates for UI labels, status and error
+messages and help sentences, filled from a small lexicon with Spanish gender and number agreement. Every
+English source occurs once in the whole corpus, so dev and test never repeat a training source.
+Standard library only.
+"""
+
+from __future__ import annotations
+
+import argparse
+import random
+import re
+import sys
+from collections import Counter
+from collections.abc import Sequence
+from dataclasses import dataclass
+from pathlib import Path
+
+import scenario_templates_errors
+import scenario_templates_features
+import scenario_templates_help
+import scenario_templates_status
+import scenario_templates_steps
+import scenario_templates_ui
+from scenario_grammar import capitalize_first, contract
+from scenario_templates_features import SHOWCASE
+
+DEFAULT_SEED = 1405
+DEFAULT_OUT = Path(__file__).resolve().parent / "corpus"
+NUM_TEST = 200
+NUM_DEV = 200
+NUM_TRAIN = 4600
+MAX_DRAWS_PER_SEGMENT = 40  # the template space is far larger; this only stops a broken template from looping
+SPLITS = ("train", "dev", "test")
+TEMPLATES = (
+    scenario_templates_ui.TEMPLATES
+    + scenario_templates_status.TEMPLATES
+    + scenario_templates_errors.TEMPLATES
+    + scenario_templates_steps.TEMPLATES
+    + scenario_templates_help.TEMPLATES
+    + scenario_templates_features.TEMPLATES
+)
+# Protected spans that must be copied to the translation unchanged: markup tags, URLs, e-mail addresses,
+# paths, printf conversions (%s, %d, %1$s) and brace placeholders ({0}, {name}).
+PROTECTED = re.compile(
+    r"<[^>]+>|https?://[^\s<>\"]+[^\s<>\".,;:)]|[\w.+-]+@[\w-]+(?:\.[\w-]+)+"
+    r"|(?:~|[A-Z]:\\|/)[\w\\/.~-]*[\w]|%(?:\d+\$)?[sd]|\{\w+\}"
+)
+
+
+@dataclass(frozen=True, slots=True)
+class SegmentPair:
+    """One line of the corpus; ``kind`` is ui, status, error or help (reported in STATS.txt only)."""
+
+    source: str
+    target: str
+    kind: str
+
+
+def finish(source: str, target: str) -> tuple[str, str]:
+    """Capitalise both sides and apply the Spanish contractions al/del; checks the pair is one clean line."""
+    source, target = capitalize_first(source), capitalize_first(contract(target))
+    for text in (source, target):
+        if "\t" in text or "\n" in text or text != text.strip() or "  " in text:
+            raise ValueError(f"malformed segment {text!r}")
+    if sorted(PROTECTED.findall(source)) != sorted(PROTECTED.findall(target)):
+        raise ValueError(f"placeholders differ: {source!r} / {target!r}")
+    return source, target
+
+
+def generate_pairs(seed: int, num_pairs: int) -> list[SegmentPair]:
+    """``num_pairs`` pairs with pairwise different sources, in drawing order; deterministic for a seed."""
+    rng = random.Random(seed)
+    weights = [weight for _, weight, _ in TEMPLATES]
+    pairs: dict[str, SegmentPair] = {}
+    for source, target in SHOWCASE:
+        source, target = finish(source, target)
+        pairs[source] = SegmentPair(source, target, "help")
+    for _ in range(num_pairs * MAX_DRAWS_PER_SEGMENT):
+        if len(pairs) == num_pairs:
+            break
+        kind, _, template = rng.choices(TEMPLATES, weights)[0]
+        source, target = finish(*template(rng))
+        if source not in pairs:
+            pairs[source] = SegmentPair(source, target, kind)
+    if len(pairs) < num_pairs:
+        raise RuntimeError(f"only {len(pairs)} distinct sources after many draws; the grammar is too small")
+    return list(pairs.values())
+
+
+def split_pairs(pairs: Sequence[SegmentPair], seed: int) -> dict[str, list[SegmentPair]]:
+    """Shuffle with the seed, then test and dev take the first blocks (so sizes are exact) and train the rest.
+
+    The SHOWCASE pairs always go to train, shuffled in with the others."""
+    rng = random.Random(seed + 1)
+    showcase = {source for source, _ in SHOWCASE}
+    drawn = [pair for pair in pairs if pair.source not in showcase]
+    rng.shuffle(drawn)
+    train = drawn[NUM_TEST + NUM_DEV :] + [pair for pair in pairs if pair.source in showcase]
+    rng.shuffle(train)
+    return {"test": drawn[:NUM_TEST], "dev": drawn[NUM_TEST : NUM_TEST + NUM_DEV], "train": train}
+
+
+def statistics_text(splits: dict[str, list[SegmentPair]], seed: int) -> str:
+    """Counts per split: segments, whitespace tokens, length range, segment kinds, segments with placeholders."""
+    lines = [
+        "Demo corpus: help centre and UI strings of Brelqua (fictional), English -> Spanish (es-ES).",
+        f"Generated by demo_models/generate_corpus.py with seed {seed}. Tokens are whitespace-separated.",
+        "",
+        "split  segments  en_tokens  es_tokens  en_min  en_max  en_mean  ui  status  error  help  protected",
+    ]
+    for name in SPLITS:
+        pairs = splits[name]
+        en_lengths = [len(pair.source.split()) for pair in pairs]
+        es_tokens = sum(len(pair.target.split()) for pair in pairs)
+        kinds = Counter(pair.kind for pair in pairs)
+        protected = sum(1 for pair in pairs if PROTECTED.search(pair.source))
+        lines.append(
+            f"{name:<5}  {len(pairs):>8}  {sum(en_lengths):>9}  {es_tokens:>9}  {min(en_lengths):>6}  "
+            f"{max(en_lengths):>6}  {sum(en_lengths) / len(pairs):>7.2f}  {kinds['ui']:>2}  "
+            f"{kinds['status']:>6}  {kinds['error']:>5}  {kinds['help']:>4}  {protected:>9}"
+        )
+    return "\n".join(lines) + "\n"
+
+
+def write_corpus(out_dir: Path, seed: int = DEFAULT_SEED) -> dict[str, list[SegmentPair]]:
+    """Write the six corpus files and STATS.txt into ``out_dir`` (created if missing); returns the splits."""
+    pairs = generate_pairs(seed, NUM_TRAIN + NUM_DEV + NUM_TEST)
+    splits = split_pairs(pairs, seed)
+    out_dir.mkdir(parents=True, exist_ok=True)
+    for name in SPLITS:
+        for language, side in (("en", "source"), ("es", "target")):
+            text = "".join(getattr(pair, side) + "\n" for pair in splits[name])
+            (out_dir / f"{name}.{language}").write_bytes(text.encode("utf-8"))
+    (out_dir / "STATS.txt").write_bytes(statistics_text(splits, seed).encode("utf-8"))
+    return splits
+
+
+def main(argv: Sequence[str] | None = None) -> int:
+    parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
+    parser.add_argument("--out", type=Path, default=DEFAULT_OUT, help="output directory (default: %(default)s)")
+    parser.add_argument("--seed", type=int, default=DEFAULT_SEED, help="random seed (default: %(default)s)")
+    arguments = parser.parse_args(argv)
+    splits = write_corpus(arguments.out, arguments.seed)
+    sizes = ", ".join(f"{name} {len(splits[name])}" for name in SPLITS)
+    print(f"wrote {arguments.out}: {sizes}")
+    return 0
+
+
+if __name__ == "__main__":
+    sys.exit(main())
