@@ -9,7 +9,7 @@ memory-mapped like every other model array; the string -> id dict is rebuilt onc
 from __future__ import annotations
 
 from collections import Counter
-from collections.abc import Iterable, Sequence
+from collections.abc import Iterable, Mapping, Sequence
 
 import numpy as np
 import numpy.typing as npt
@@ -41,9 +41,12 @@ class Vocabulary:
         counts: Counter[str] = Counter()
         for tokens in segments:
             counts.update(tokens)
-        for special in SPECIAL_TOKENS:
-            counts.pop(special, None)
-        kept = sorted((token for token, count in counts.items() if count >= min_count),
+        return cls.from_counts(counts, min_count)
+
+    @classmethod
+    def from_counts(cls, counts: Mapping[str, int], min_count: int = 1) -> Vocabulary:
+        """Like ``build``, from token counts already made."""
+        kept = sorted((token for token, count in counts.items() if count >= min_count and token not in SPECIAL_TOKENS),
                       key=lambda token: (-counts[token], token))
         return cls(SPECIAL_TOKENS + tuple(kept))
 

@@ -19,6 +19,7 @@ J small matrix products of shape (B, 2I) x (2I, 2I), with per-step scaling (Rabi
 
 from __future__ import annotations
 
+import functools
 import time
 from dataclasses import dataclass
 
@@ -26,7 +27,13 @@ import numpy as np
 import numpy.typing as npt
 from tqdm.auto import tqdm
 
-from decoder.align.ibm1 import ExpectedCounts, IterationReport, TrainingHistory, alignment_array_of, concatenate_alignments
+from decoder.align.ibm1 import (
+    ExpectedCounts,
+    IterationReport,
+    TrainingHistory,
+    alignment_array_of,
+    concatenate_alignments,
+)
 from decoder.align.links import AlignmentArray
 from decoder.align.workspace import CellWorkspace, ShardJob
 
@@ -72,12 +79,17 @@ def transition_model(source_length: int, parameters: HmmParameters) -> tuple[npt
 
 
 def _emissions(probabilities: npt.NDArray[np.float64], bucket_cells: npt.NDArray[np.int32]) -> npt.NDArray[np.float64]:
-    """(B, J, 2I) emission probabilities: word states from columns 1.., every NULL state from column 0."""
-    values = probabilities[bucket_cells]
+    """(J, B, 2I) emission probabilities, position-major so that each step reads one contiguous block: word
+    states from cell columns 1.., every NULL state from column 0."""
+    values = probabilities.take(np.ascontiguousarray(bucket_cells.transpose(1, 0, 2)))
     size = values.shape[2] - 1
-    return np.concatenate([values[:, :, 1:], np.repeat(values[:, :, :1], size, axis=2)], axis=2)
+    emissions = np.empty(values.shape[:2] + (2 * size,))
+    emissions[:, :, :size] = values[:, :, 1:]
+    emissions[:, :, size:] = values[:, :, :1]
+    return emissions
 
 
+@functools.lru_cache(maxsize=256)
 def _jump_index_matrix(source_length: int) -> npt.NDArray[np.int64]:
     """Jump-table index for every (from state, to word state) pair: d = i - position(from)."""
     from_positions = np.tile(np.arange(source_length), 2)
@@ -88,40 +100,46 @@ def hmm_expected_counts(job: ShardJob) -> HmmExpectedCounts:
     """E-step over one shard: expected emission counts per table key, expected jump counts, log-likelihood."""
     layout, parameters = job.layout, job.settings
     assert isinstance(parameters, HmmParameters) and layout.num_null == 1
-    probabilities = np.load(job.parameters_path, mmap_mode="r")
+    probabilities = np.load(job.parameters_path)  # small and gathered from at random: keep it in memory
     cells = layout.load_cells()
     posteriors = np.empty(layout.num_cells, dtype=np.float64)
     jump_counts = np.zeros(NUM_JUMPS)
     log_likelihood, num_tokens = 0.0, 0
     for bucket in layout.buckets:
         size, length = bucket.source_length, bucket.target_length
-        bucket_cells = layout.bucket_cells(cells, bucket)
         initial, transitions = transition_model(size, parameters)
-        emissions = _emissions(probabilities, bucket_cells)
-        num_pairs = emissions.shape[0]
+        emissions = _emissions(probabilities, layout.bucket_cells(cells, bucket))  # (J, B, 2I)
         forward = np.empty_like(emissions)
-        scales = np.empty((num_pairs, length))
-        step = initial[None, :] * emissions[:, 0]
+        scales = np.empty(emissions.shape[:2])
+        np.multiply(initial, emissions[0], out=forward[0])
         for position in range(length):
             if position:
-                step = (forward[:, position - 1] @ transitions) * emissions[:, position]
-            scales[:, position] = step.sum(axis=1)
-            forward[:, position] = step / scales[:, position, None]
+                np.matmul(forward[position - 1], transitions, out=forward[position])
+                forward[position] *= emissions[position]
+            scales[position] = forward[position].sum(axis=1)
+            forward[position] /= scales[position, :, None]
+        # scaled_next[j] = e_j * beta_j / c_j: what both the backward step and the expected transitions use
+        scaled_next = np.empty_like(emissions)
         backward = np.empty_like(emissions)
-        backward[:, length - 1] = 1.0
-        for position in range(length - 2, -1, -1):
-            weighted = emissions[:, position + 1] * backward[:, position + 1] / scales[:, position + 1, None]
-            backward[:, position] = weighted @ transitions.T
-        state_posteriors = forward * backward  # (B, J, 2I), each row sums to 1
-        cell_posteriors = np.concatenate(
-            [state_posteriors[:, :, size:].sum(axis=2, keepdims=True), state_posteriors[:, :, :size]], axis=2)
-        posteriors[bucket.start:bucket.start + cell_posteriors.size] = cell_posteriors.ravel()
+        backward[length - 1] = 1.0
+        for position in range(length - 1, 0, -1):
+            np.multiply(emissions[position], backward[position], out=scaled_next[position])
+            scaled_next[position] /= scales[position, :, None]
+            np.matmul(scaled_next[position], transitions.T, out=backward[position - 1])
+        state_posteriors = forward * backward  # (J, B, 2I), each row sums to 1
+        cell_posteriors = np.empty(emissions.shape[:2] + (size + 1,))
+        cell_posteriors[:, :, 0] = state_posteriors[:, :, size:].sum(axis=2)
+        cell_posteriors[:, :, 1:] = state_posteriors[:, :, :size]
+        out = posteriors[bucket.start:bucket.start + cell_posteriors.size].reshape(
+            bucket.num_pairs, length, size + 1)
+        out[...] = cell_posteriors.transpose(1, 0, 2)
         if length > 1:
-            weighted = (emissions[:, 1:] * backward[:, 1:] / scales[:, 1:, None]).reshape(-1, 2 * size)
-            pair_flows = forward[:, :-1].reshape(-1, 2 * size).T @ weighted * transitions  # expected transitions
+            previous = forward[:-1].reshape(-1, 2 * size)
+            following = scaled_next[1:].reshape(-1, 2 * size)
+            pair_flows = (previous.T @ following) * transitions  # expected transitions, summed over the bucket
             jump_counts += np.bincount(_jump_index_matrix(size).ravel(), weights=pair_flows[:, :size].ravel(),
                                        minlength=NUM_JUMPS)
-        start_flows = state_posteriors[:, 0, :size].sum(axis=0)
+        start_flows = state_posteriors[0, :, :size].sum(axis=0)
         jump_counts += np.bincount(_jump_index(np.arange(size) + 1), weights=start_flows, minlength=NUM_JUMPS)
         log_likelihood += float(np.log(scales).sum())
         num_tokens += scales.size
@@ -133,7 +151,7 @@ def hmm_viterbi(job: ShardJob) -> AlignmentArray:
     """Most probable state sequence per pair; target words in NULL states stay unaligned. Links (source, target)."""
     layout, parameters = job.layout, job.settings
     assert isinstance(parameters, HmmParameters)
-    probabilities = np.load(job.parameters_path, mmap_mode="r")
+    probabilities = np.load(job.parameters_path)
     cells = layout.load_cells()
     per_pair: list[npt.NDArray[np.int32]] = [np.zeros((0, 2), np.int32)] * layout.num_pairs
     for bucket in layout.buckets:
@@ -141,13 +159,13 @@ def hmm_viterbi(job: ShardJob) -> AlignmentArray:
         initial, transitions = transition_model(size, parameters)
         log_transitions = np.log(np.maximum(transitions, LOG_FLOOR))
         log_emissions = np.log(np.maximum(_emissions(probabilities, layout.bucket_cells(cells, bucket)), LOG_FLOOR))
-        num_pairs = log_emissions.shape[0]
+        num_pairs = log_emissions.shape[1]
         back_pointers = np.zeros((num_pairs, length, 2 * size), dtype=np.int32)
-        best = np.log(np.maximum(initial, LOG_FLOOR))[None, :] + log_emissions[:, 0]
+        best = np.log(np.maximum(initial, LOG_FLOOR))[None, :] + log_emissions[0]
         for position in range(1, length):
             scores = best[:, :, None] + log_transitions[None, :, :]
             back_pointers[:, position] = scores.argmax(axis=1)
-            best = scores.max(axis=1) + log_emissions[:, position]
+            best = scores.max(axis=1) + log_emissions[position]
         states = np.empty((num_pairs, length), dtype=np.int64)
         states[:, -1] = best.argmax(axis=1)
         rows = np.arange(num_pairs)

@@ -16,7 +16,6 @@ import numpy as np
 import numpy.typing as npt
 from tqdm.auto import tqdm
 
-from decoder.align.layout import ShardLayout
 from decoder.align.lexical_table import LexicalTable
 from decoder.align.links import AlignmentArray
 from decoder.align.workspace import CellWorkspace, ShardJob

@@ -1,0 +1,209 @@
+"""`phrasework ...`: parses arguments, calls the library, prints results. No MT logic lives here.
+
+Errors the library raises on purpose (DecoderError) are printed as one line on stderr with exit status 2;
+nothing prints a traceback at the user.
+"""
+
+from __future__ import annotations
+
+import argparse
+import os
+import sys
+import time
+from collections.abc import Sequence
+from pathlib import Path
+
+from decoder.align.aligner import AlignmentSettings, align_corpus
+from decoder.align.links import format_links
+from decoder.align.symmetrize import SYMMETRIZATION_METHODS
+from decoder.corpus.cleaning import CleaningRules
+from decoder.corpus.reader import CORPUS_FORMATS, detect_format
+from decoder.errors import DecoderError
+from decoder.executor import make_executor
+from decoder.training_data import read_training_data
+
+EXIT_USAGE = 2
+
+
+def _add_corpus_arguments(parser: argparse.ArgumentParser) -> None:
+    parser.add_argument("--source-file", required=True, type=Path,
+                        help="source side: a plain text file, or the whole corpus for tsv/tmx/po/mo")
+    parser.add_argument("--target-file", type=Path, help="target side (plain format only)")
+    parser.add_argument("--source-lang", default="und", help="BCP 47 tag of the source language, e.g. en")
+    parser.add_argument("--target-lang", default="und", help="BCP 47 tag of the target language, e.g. es")
+    parser.add_argument("--corpus-format", choices=CORPUS_FORMATS,
+                        help="default: from the file extension (.tsv .tmx .po .mo), else plain")
+    parser.add_argument("--max-tokens", type=int, default=80, help="drop pairs with a longer side (default 80)")
+    parser.add_argument("--max-length-ratio", type=float, default=9.0,
+                        help="drop pairs whose longer side is more than this many times the shorter (default 9)")
+    parser.add_argument("--workers", type=int, default=os.cpu_count() or 1,
+                        help="worker processes for the map steps (default: all cores)")
+
+
+def _add_alignment_arguments(parser: argparse.ArgumentParser) -> None:
+    parser.add_argument("--model1-iterations", type=int, default=5)
+    parser.add_argument("--hmm-iterations", type=int, default=5)
+    parser.add_argument("--symmetrize", choices=SYMMETRIZATION_METHODS, default="grow-diag-final-and")
+
+
+def _alignment_settings(args: argparse.Namespace) -> AlignmentSettings:
+    try:
+        return AlignmentSettings(args.model1_iterations, args.hmm_iterations, symmetrization=args.symmetrize)
+    except ValueError as error:
+        raise DecoderError(str(error)) from error
+
+
+def _read_corpus(args: argparse.Namespace, executor, keep_cased_target: bool = False):
+    corpus_format = args.corpus_format or detect_format(args.source_file)
+    target_file = args.target_file if corpus_format == "plain" else None
+    if corpus_format != "plain" and args.target_file is not None:
+        raise DecoderError(f"--target-file is only for the plain format; {corpus_format} holds both sides")
+    return read_training_data(
+        args.source_file, target_file, args.source_lang, args.target_lang, corpus_format=corpus_format,
+        rules=CleaningRules(args.max_tokens, args.max_length_ratio), executor=executor, show_progress=True,
+        keep_cased_target=keep_cased_target)
+
+
+def _print_alignment_summary(result, seconds: float) -> None:
+    for direction in (result.forward, result.backward):
+        for history in direction.histories:
+            for report in history.iterations:
+                print(f"{history.stage} iteration {report.iteration}: perplexity {report.perplexity:.3f}, "
+                      f"log-likelihood {report.log_likelihood:.1f}, {report.seconds:.2f} s", file=sys.stderr)
+    print(f"links after symmetrization: {len(result.symmetrized.links)}; alignment took {seconds:.1f} s",
+          file=sys.stderr)
+
+
+def _show_examples(data, alignments, count: int) -> None:
+    for pair in range(min(count, len(data.corpus))):
+        source = data.source_vocabulary.decode(data.corpus.source[pair])
+        target = data.target_vocabulary.decode(data.corpus.target[pair])
+        links = sorted(alignments.link_set(pair))
+        print(f"\npair {int(data.pair_indices[pair]) + 1}")
+        print(f"  source: {' '.join(source)}")
+        print(f"  target: {' '.join(target)}")
+        print("  links:  " + "  ".join(f"{source[i]}={target[j]}" for i, j in links))
+
+
+def command_align(args: argparse.Namespace) -> int:
+    settings = _alignment_settings(args)
+    started = time.perf_counter()
+    executor = make_executor(args.workers)
+    try:
+        data = _read_corpus(args, executor)
+        for line in data.summary_lines():
+            print(line, file=sys.stderr)
+        result = align_corpus(data.corpus, len(data.source_vocabulary), len(data.target_vocabulary), settings,
+                              executor=executor, show_progress=True)
+    finally:
+        executor.close()
+    lines = [""] * data.num_input_pairs
+    for kept, position in enumerate(data.pair_indices):
+        lines[position] = format_links(result.symmetrized[kept])
+    args.out.parent.mkdir(parents=True, exist_ok=True)
+    args.out.write_text("".join(line + "\n" for line in lines), encoding="utf-8")
+    _print_alignment_summary(result, time.perf_counter() - started)
+    print(f"wrote {len(lines)} lines to {args.out}", file=sys.stderr)
+    if args.show:
+        _show_examples(data, result.symmetrized, args.show)
+    return 0
+
+
+def command_train(args: argparse.Namespace) -> int:
+    from decoder.phrases.settings import PhraseSettings
+    from decoder.training import TrainingSettings, train_model
+
+    corpus_format = args.corpus_format or detect_format(args.source_file)
+    if corpus_format != "plain" and args.target_file is not None:
+        raise DecoderError(f"--target-file is only for the plain format; {corpus_format} holds both sides")
+    try:
+        settings = TrainingSettings(
+            cleaning=CleaningRules(args.max_tokens, args.max_length_ratio), alignment=_alignment_settings(args),
+            phrases=PhraseSettings(max_phrase_length=args.max_phrase_length,
+                                   max_targets_per_source=args.max_targets_per_source,
+                                   drop_singletons=args.drop_singletons),
+            lm_order=args.lm_order, workers=args.workers)
+    except ValueError as error:
+        raise DecoderError(str(error)) from error
+    if not 1 <= args.lm_order <= 5:
+        raise DecoderError("--lm-order must be between 1 and 5")
+    summary = train_model(args.source_file, args.target_file if corpus_format == "plain" else None,
+                          args.source_lang, args.target_lang, args.out, corpus_format=corpus_format,
+                          lm_files=args.lm_file, settings=settings, force=args.force, show_progress=True)
+    for line in summary.lines():
+        print(line, file=sys.stderr)
+    return 0
+
+
+def command_phrases(args: argparse.Namespace) -> int:
+    from decoder.text.pipeline import prepare_segment
+    from decoder.translation_model import load_translation_model
+
+    model = load_translation_model(args.model)
+    tokens = prepare_segment(args.source, model.source_language).model_tokens
+    ids = model.source_vocabulary.encode(tokens)
+    table = model.phrase_table
+    rows = table.lookup(ids)
+    if not rows:
+        print(f"no phrase pairs for source phrase {' '.join(tokens)!r}", file=sys.stderr)
+        return 1
+    header = ["target", *table.SCORE_NAMES, *table.REORDERING_NAMES, "alignment", "count"]
+    print("\t".join(header))
+    ordered = sorted(rows, key=lambda row: -float(table.scores[row, 0]))[: args.limit]
+    for row in ordered:
+        target = " ".join(model.target_vocabulary.decode(table.target_phrase(row)))
+        values = [f"{float(value):.4f}" for value in (*table.scores[row], *table.reordering[row])]
+        links = " ".join(f"{int(i)}-{int(j)}" for i, j in table.alignment(row))
+        print("\t".join([target, *values, links, str(int(table.pair_counts[row]))]))
+    return 0
+
+
+def build_parser() -> argparse.ArgumentParser:
+    parser = argparse.ArgumentParser(prog="phrasework", description="Statistical phrase-based machine translation.")
+    commands = parser.add_subparsers(dest="command", required=True, metavar="COMMAND")
+
+    align = commands.add_parser("align", help="word-align a parallel corpus (IBM Model 1 + HMM, both directions)",
+                                description="Write one line per input pair: links i-j (source-target, 0-based).")
+    _add_corpus_arguments(align)
+    _add_alignment_arguments(align)
+    align.add_argument("--out", required=True, type=Path, help="alignment file to write")
+    align.add_argument("--show", type=int, default=0, metavar="N", help="print the first N aligned pairs")
+    align.set_defaults(handler=command_align)
+
+    train = commands.add_parser("train", help="train a phrase-based model from a parallel corpus",
+                                description="Clean, align, extract and score phrases, train the LM, write MODEL_DIR.")
+    _add_corpus_arguments(train)
+    _add_alignment_arguments(train)
+    train.add_argument("--out", required=True, type=Path, help="model directory to create")
+    train.add_argument("--lm-file", type=Path, action="append", default=[],
+                       help="extra target-language text for the language model (repeatable)")
+    train.add_argument("--lm-order", type=int, default=5, help="n-gram order of the language model (1-5)")
+    train.add_argument("--max-phrase-length", type=int, default=7, help="tokens per phrase side (default 7)")
+    train.add_argument("--max-targets-per-source", type=int, default=20,
+                       help="target phrases kept per source phrase (default 20)")
+    train.add_argument("--drop-singletons", action="store_true", help="drop phrase pairs seen only once")
+    train.add_argument("--force", action="store_true", help="replace an existing model directory")
+    train.set_defaults(handler=command_train)
+
+    phrases = commands.add_parser("phrases", help="print the phrase pairs of a source phrase")
+    phrases.add_argument("model", type=Path, metavar="MODEL_DIR")
+    phrases.add_argument("--source", required=True, help="the source phrase (raw text; tokenized as in training)")
+    phrases.add_argument("--limit", type=int, default=20, help="at most this many pairs (best phrase_fwd first)")
+    phrases.set_defaults(handler=command_phrases)
+    return parser
+
+
+def main(argv: Sequence[str] | None = None) -> int:
+    args = build_parser().parse_args(argv)
+    try:
+        return args.handler(args)
+    except DecoderError as error:
+        print(f"phrasework: error: {error}", file=sys.stderr)
+        return EXIT_USAGE
+    except KeyboardInterrupt:
+        print("phrasework: interrupted", file=sys.stderr)
+        return 130
+
+
+if __name__ == "__main__":
+    sys.exit(main())
