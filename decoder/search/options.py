@@ -190,4 +190,7 @@ class OptionBuilder:
 
 def _carries_class_tokens(source_tokens: Sequence[str], target_tokens: Sequence[str]) -> bool:
     """Whether the target has exactly the class tokens of the source (as a multiset)."""
-    return sorted(t for t in source_tokens if t in CLASS_TOKENS) == sorted(t for t in target_tokens if t in CLASS_TOKENS)
+    def class_tokens(tokens: Sequence[str]) -> list[str]:
+        return sorted(token for token in tokens if token in CLASS_TOKENS)
+
+    return class_tokens(source_tokens) == class_tokens(target_tokens)

@@ -128,8 +128,8 @@ class StackSearch:
         return Hypothesis(coverage, hypothesis.num_covered + option.length, option.start, option.end, lm_state,
                           option, score, self.future_costs.of(coverage), hypothesis, option, num_output)
 
-    def _free_spans(self, hypothesis: Hypothesis, length: int | None = None) -> Iterator[
-            tuple[int, int, list[TranslationOption]]]:
+    def _free_spans(self, hypothesis: Hypothesis, length: int | None = None, check_distortion: bool = True
+                    ) -> Iterator[tuple[int, int, list[TranslationOption]]]:
         """(start, end, options) of spans the hypothesis may cover next (of ``length`` words, if given)."""
         coverage = hypothesis.coverage
         for start in range(self.num_words):
@@ -138,7 +138,8 @@ class StackSearch:
             for end, options in self.spans_by_start[start]:
                 if length is not None and end - start != length:
                     continue
-                if self._is_free(coverage, start, end) and self._span_allowed(hypothesis, start, end):
+                if self._is_free(coverage, start, end) and (
+                        not check_distortion or self._span_allowed(hypothesis, start, end)):
                     yield start, end, options
 
     # -- the two algorithms -------------------------------------------------------------------------------
@@ -171,38 +172,55 @@ class StackSearch:
         survivors[0] = stacks[0].pruned(self.settings.stack_size)
         max_length = max((end - start for start, end in self.options.by_span), default=1)
         for size in range(1, self.num_words + 1):
-            heap: list[tuple[float, int, int, int, int, Hypothesis]] = []
             grids: list[tuple[list[Hypothesis], list[TranslationOption]]] = []
-            tie = 0
             for length in range(1, min(max_length, size) + 1):
                 groups: dict[int, list[Hypothesis]] = {}
                 for hypothesis in survivors[size - length] or ():
                     groups.setdefault(hypothesis.coverage, []).append(hypothesis)
                 for group in groups.values():
                     group.sort(key=lambda hypothesis: -hypothesis.score)
-                    for start, end, options in self._free_spans(group[0], length):
+                    # spans free for the coverage; the distortion limit depends on each hypothesis's last end
+                    for start, end, options in self._free_spans(group[0], length, check_distortion=False):
                         allowed = [h for h in group if self._span_allowed(h, start, end)]
                         if allowed:
                             grids.append((allowed, options))
-            seen: set[tuple[int, int, int]] = set()
-
-            def push(grid: int, row: int, column: int) -> None:
-                nonlocal tie
-                hypotheses, options = grids[grid]
-                if row >= len(hypotheses) or column >= len(options) or (grid, row, column) in seen:
-                    return
-                seen.add((grid, row, column))
-                new = self._extend(hypotheses[row], options[column])
-                tie += 1
-                heapq.heappush(heap, (-new.total, tie, grid, row, column, new))
-
-            for grid in range(len(grids)):
-                push(grid, 0, 0)
+            queue = _CubeQueue(self, grids)
             pops = 0
-            while heap and pops < self.settings.cube_pop_limit:
-                _, _, grid, row, column, new = heapq.heappop(heap)
-                stacks[size].add(new)
+            while pops < self.settings.cube_pop_limit:
+                popped = queue.pop()
+                if popped is None:
+                    break
+                stacks[size].add(popped)
                 pops += 1
-                push(grid, row + 1, column)
-                push(grid, row, column + 1)
             survivors[size] = stacks[size].pruned(self.settings.stack_size)
+
+
+class _CubeQueue:
+    """The heap of one stack's cube pruning: grids of (hypotheses best first) x (options best first); popping
+    the best item pushes its two neighbours (Huang & Chiang 2007, algorithm 2)."""
+
+    def __init__(self, search: StackSearch, grids: list[tuple[list[Hypothesis], list[TranslationOption]]]) -> None:
+        self.search = search
+        self.grids = grids
+        self.heap: list[tuple[float, int, int, int, int, Hypothesis]] = []
+        self.seen: set[tuple[int, int, int]] = set()
+        self.tie = 0
+        for grid in range(len(grids)):
+            self.push(grid, 0, 0)
+
+    def push(self, grid: int, row: int, column: int) -> None:
+        hypotheses, options = self.grids[grid]
+        if row >= len(hypotheses) or column >= len(options) or (grid, row, column) in self.seen:
+            return
+        self.seen.add((grid, row, column))
+        new = self.search._extend(hypotheses[row], options[column])
+        self.tie += 1
+        heapq.heappush(self.heap, (-new.total, self.tie, grid, row, column, new))
+
+    def pop(self) -> Hypothesis | None:
+        if not self.heap:
+            return None
+        _, _, grid, row, column, new = heapq.heappop(self.heap)
+        self.push(grid, row + 1, column)
+        self.push(grid, row, column + 1)
+        return new
