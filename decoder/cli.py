@@ -13,6 +13,8 @@ import time
 from collections.abc import Sequence
 from pathlib import Path
 
+from tqdm.auto import tqdm
+
 from decoder.align.aligner import AlignmentSettings, align_corpus
 from decoder.align.links import format_links
 from decoder.align.symmetrize import SYMMETRIZATION_METHODS
@@ -20,6 +22,7 @@ from decoder.corpus.cleaning import CleaningRules
 from decoder.corpus.reader import CORPUS_FORMATS, detect_format
 from decoder.errors import DecoderError
 from decoder.executor import make_executor
+from decoder.search.settings import TranslationOptions
 from decoder.training_data import read_training_data
 
 EXIT_USAGE = 2
@@ -158,6 +161,59 @@ def command_phrases(args: argparse.Namespace) -> int:
     return 0
 
 
+def _parse_weights(items: Sequence[str]) -> dict[str, float]:
+    weights = {}
+    for item in items:
+        name, sep, value = item.partition("=")
+        try:
+            weights[name.strip()] = float(value)
+        except ValueError:
+            raise DecoderError(f"--weight takes NAME=NUMBER, got {item!r}") from None
+        if not sep:
+            raise DecoderError(f"--weight takes NAME=NUMBER, got {item!r}")
+    return weights
+
+
+def _translation_options(args: argparse.Namespace, model) -> TranslationOptions:
+    search = model.search_defaults.with_overrides(**{
+        name: value for name, value in (
+            ("algorithm", args.algorithm), ("stack_size", args.stack_size), ("beam_width", args.beam_width),
+            ("distortion_limit", args.distortion_limit), ("cube_pop_limit", args.cube_pop_limit),
+            ("max_options_per_span", args.max_options_per_span)) if value is not None})
+    include = set(args.include or ())
+    return TranslationOptions(n_best=args.n_best, search=search, weights=_parse_weights(args.weight) or None,
+                              include_segmentation="segmentation" in include,
+                              include_alignment="alignment" in include,
+                              max_segment_tokens=args.max_segment_tokens)
+
+
+def command_translate(args: argparse.Namespace) -> int:
+    from decoder.batch_translation import translate_lines, use_translator
+    from decoder.search.translator import Translator
+    from decoder.translation_model import load_translation_model
+
+    model = load_translation_model(args.model)
+    options = _translation_options(args, model)
+    use_translator(Translator(model))
+    executor = make_executor(args.workers)  # forks after the model is mapped: workers share it
+    failures = 0
+    output = sys.stdout
+    progress = tqdm(desc="translating", unit=" lines", disable=output.isatty(), file=sys.stderr)
+    try:
+        for result in translate_lines(sys.stdin.buffer, options, args.format, executor):
+            output.write(result.text + "\n")
+            progress.update(1)
+            if result.error is not None:
+                failures += 1
+                print(f"phrasework: line {result.line_number}: {result.error}", file=sys.stderr)
+        output.flush()
+    finally:
+        progress.close()
+        executor.close()
+    print(f"translated {progress.n} lines ({failures} with errors)", file=sys.stderr)
+    return 1 if failures else 0
+
+
 def build_parser() -> argparse.ArgumentParser:
     parser = argparse.ArgumentParser(prog="phrasework", description="Statistical phrase-based machine translation.")
     commands = parser.add_subparsers(dest="command", required=True, metavar="COMMAND")
@@ -184,6 +240,29 @@ def build_parser() -> argparse.ArgumentParser:
     train.add_argument("--drop-singletons", action="store_true", help="drop phrase pairs seen only once")
     train.add_argument("--force", action="store_true", help="replace an existing model directory")
     train.set_defaults(handler=command_train)
+
+    translate = commands.add_parser(
+        "translate", help="translate stdin to stdout, one line per line",
+        description="Reads raw text, one segment per line, and writes one output line per input line, always. "
+                    "Machine translations are drafts: have them reviewed by a qualified translator before "
+                    "publication, above all for safety, medical, legal or regulatory text.")
+    translate.add_argument("--model", required=True, type=Path, metavar="MODEL_DIR")
+    translate.add_argument("--n-best", type=int, default=1, help="translations per segment (jsonl shows them)")
+    translate.add_argument("--format", choices=("text", "jsonl"), default="text")
+    translate.add_argument("--include", action="append", choices=("segmentation", "alignment"),
+                           help="with --format jsonl: add phrase segmentation and/or word alignment")
+    translate.add_argument("--workers", type=int, default=1, help="worker processes (default 1)")
+    translate.add_argument("--algorithm", choices=("cube", "stack"))
+    translate.add_argument("--stack-size", type=int)
+    translate.add_argument("--beam-width", type=float)
+    translate.add_argument("--distortion-limit", type=int, help="0: monotone; negative: unlimited")
+    translate.add_argument("--cube-pop-limit", type=int)
+    translate.add_argument("--max-options-per-span", type=int)
+    translate.add_argument("--max-segment-tokens", type=int, default=150,
+                           help="longer segments are split at punctuation and translated piece by piece")
+    translate.add_argument("--weight", action="append", default=[], metavar="NAME=VALUE",
+                           help="override one feature weight (repeatable)")
+    translate.set_defaults(handler=command_translate)
 
     phrases = commands.add_parser("phrases", help="print the phrase pairs of a source phrase")
     phrases.add_argument("model", type=Path, metavar="MODEL_DIR")
