@@ -1,4 +1,5 @@
 # Everything runs inside a project-local virtual environment, created on first use.
+SHELL := /bin/bash
 PYTHON ?= python3
 VENV := .venv
 BIN := $(VENV)/bin
@@ -13,11 +14,17 @@ $(STAMP): pyproject.toml
 	$(BIN)/pip install --quiet -e '.[dev]'
 	touch $(STAMP)
 
-## demo: set up, align the demo corpus and show a few aligned pairs
-demo: $(STAMP)
-	mkdir -p $(DEMO_OUT)
-	$(BIN)/phrasework align --source-file demo_models/corpus/train.en --target-file demo_models/corpus/train.es \
-		--source-lang en --target-lang es --out $(DEMO_OUT)/train.align --show 5
+DEMO_MODEL := $(DEMO_OUT)/demo-en-es
+
+## demo: set up, train the demo model on first use (under a minute), show what it learned and translate samples
+demo: $(STAMP) $(DEMO_MODEL)/manifest.json
+	$(BIN)/phrasework phrases $(DEMO_MODEL) --source "sync hub" --limit 3
+	$(BIN)/phrasework phrases $(DEMO_MODEL) --source "workspace" --limit 3
+	head -n 8 demo_models/corpus/test.en | $(BIN)/phrasework translate --model $(DEMO_MODEL) | paste -d '\n' <(head -n 8 demo_models/corpus/test.en | sed 's/^/  en: /') <(cat | sed 's/^/  es: /')
+
+$(DEMO_MODEL)/manifest.json: $(STAMP) demo_models/corpus/train.en demo_models/corpus/train.es
+	$(BIN)/phrasework train --source-file demo_models/corpus/train.en --target-file demo_models/corpus/train.es \
+		--source-lang en --target-lang es --out $(DEMO_MODEL) --force
 
 ## test: the default test suite (what CI runs)
 test: $(STAMP)
