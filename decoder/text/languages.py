@@ -52,10 +52,13 @@ def load_abbreviations(path: str | Path) -> tuple[tuple[str, ...], ...]:
     return tuple(entries)
 
 
-@functools.cache
 def abbreviations(language: str) -> tuple[tuple[str, ...], ...]:
     """Abbreviation entries of the rule set for ``language`` (empty for the generic rules)."""
-    name = rule_set(language)
+    return _abbreviations_of_rule_set(rule_set(language))
+
+
+@functools.cache  # one entry per rule set, so the cache stays small
+def _abbreviations_of_rule_set(name: str) -> tuple[tuple[str, ...], ...]:
     if name == GENERIC:
         return ()
     return load_abbreviations(DATA_DIR / f"abbreviations-{name}.txt")

@@ -218,7 +218,7 @@ def _compile(name: str, with_fast_paths: bool = True) -> TokenPattern:
     return TokenPattern(regex, (None,) + tuple(kind for kind, _ in parts))
 
 
-@functools.cache
+@functools.lru_cache(maxsize=256)  # keyed by the tag as given; bounded because tags come from requests
 def token_pattern(language: str) -> TokenPattern:
     """The compiled tokenizer for a BCP 47 tag (cached per rule set), for callers that need raw matches."""
     return _compile(rule_set(language))
