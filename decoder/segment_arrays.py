@@ -13,6 +13,18 @@ import numpy as np
 import numpy.typing as npt
 
 
+def unique_sorted(values: npt.ArrayLike) -> npt.NDArray:
+    """Sorted distinct values of a 1-D array. Same result as ``np.unique(values)``, which in numpy 2.x hashes
+    instead of sorting and is far slower on large integer arrays."""
+    ordered = np.sort(np.asarray(values).ravel())
+    if len(ordered) == 0:
+        return ordered
+    keep = np.empty(len(ordered), dtype=bool)
+    keep[0] = True
+    np.not_equal(ordered[1:], ordered[:-1], out=keep[1:])
+    return ordered[keep]
+
+
 @dataclass(frozen=True, slots=True)
 class SegmentArray:
     """Token ids of many segments. Invariant: offsets[0] == 0, offsets non-decreasing, offsets[-1] == len(ids)."""

@@ -21,7 +21,7 @@ from pathlib import Path
 import numpy as np
 import numpy.typing as npt
 
-from decoder.segment_arrays import ParallelArrays, SegmentArray
+from decoder.segment_arrays import ParallelArrays, SegmentArray, unique_sorted
 from decoder.vocabulary import NULL_ID
 
 
@@ -98,8 +98,8 @@ def _iterate_bucket_keys(corpus: ParallelArrays, num_target_words: int, num_null
 
 def cooccurring_keys(corpus: ParallelArrays, num_target_words: int, num_null: int) -> npt.NDArray[np.int64]:
     """Sorted unique table keys of every cell of the shard (the map step of building the table)."""
-    parts = [np.unique(keys) for *_, keys in _iterate_bucket_keys(corpus, num_target_words, num_null)]
-    return np.unique(np.concatenate(parts)) if parts else np.zeros(0, dtype=np.int64)
+    parts = [unique_sorted(keys) for *_, keys in _iterate_bucket_keys(corpus, num_target_words, num_null)]
+    return unique_sorted(np.concatenate(parts)) if parts else np.zeros(0, dtype=np.int64)
 
 
 def build_layout(

@@ -21,7 +21,7 @@ import numpy.typing as npt
 from decoder.align.layout import ShardLayout, build_layout, cooccurring_keys
 from decoder.align.lexical_table import LexicalTable
 from decoder.executor import Executor, SerialExecutor
-from decoder.segment_arrays import ParallelArrays
+from decoder.segment_arrays import ParallelArrays, unique_sorted
 
 Result = TypeVar("Result")
 
@@ -83,7 +83,7 @@ class CellWorkspace:
         self.shard_bounds = bounds
         shards = [corpus.slice(start, stop) for start, stop in bounds]
         key_lists = self.executor.map(_shard_keys, [_KeysJob(s, num_target_words, self.num_null) for s in shards])
-        self.table_keys = np.unique(np.concatenate(key_lists)) if key_lists else np.zeros(0, np.int64)
+        self.table_keys = unique_sorted(np.concatenate(key_lists)) if key_lists else np.zeros(0, np.int64)
         keys_path = self.write_array("table_keys", self.table_keys)
         jobs = [_LayoutJob(shard, keys_path, num_target_words, self.num_null, str(self.directory / f"cells-{k}.npy"))
                 for k, shard in enumerate(shards)]

@@ -120,7 +120,9 @@ def _empty_instances() -> PhraseInstances:
 
 
 def _orientation(monotone: npt.NDArray[np.bool_], swap: npt.NDArray[np.bool_]) -> npt.NDArray[np.int8]:
-    """MONOTONE where ``monotone`` (even if ``swap`` holds too), else SWAP where ``swap``, else DISCONTINUOUS."""
+    """MONOTONE where ``monotone`` (even if ``swap`` holds too), else SWAP where ``swap``, else DISCONTINUOUS.
+
+    Monotone takes precedence when the target word next to the pair links to both sides of the source span."""
     return np.where(monotone, MONOTONE, np.where(swap, SWAP, DISCONTINUOUS)).astype(np.int8)
 
 

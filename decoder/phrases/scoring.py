@@ -120,7 +120,7 @@ def prune_phrase_pairs(
         ranked = rows[crowded]
         sources = scored.pair_source[ranked]
         quality = scored.scores[ranked, PHRASE_FWD] + scored.scores[ranked, LEX_FWD]
-        order = np.lexsort((scored.pair_target[ranked], quality, sources))
+        order = np.lexsort((scored.pair_target[ranked], -quality, sources))
         starts = np.flatnonzero(group_starts([sources[order]]))
         rank = np.arange(len(order)) - np.repeat(starts, np.diff(np.append(starts, len(order))))
         rows = np.sort(np.concatenate([rows[~crowded], ranked[order[rank < max_targets_per_source]]]))
