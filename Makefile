@@ -6,7 +6,7 @@ BIN := $(VENV)/bin
 STAMP := $(VENV)/.installed
 DEMO_OUT := demo_models/build
 
-.PHONY: demo test test-all lint format bench-align clean
+.PHONY: demo test test-all lint format bench-align bench-train bench-decode bench-service clean
 
 $(STAMP): pyproject.toml
 	$(PYTHON) -m venv $(VENV)
@@ -41,9 +41,18 @@ lint: $(STAMP)
 format: $(STAMP)
 	$(BIN)/ruff format decoder service tests bench
 
-## bench-align: the alignment benchmark on the real UI-string corpus (see bench/README.md)
+## bench-*: benchmarks on the real UI-string corpus (results go to bench/RESULTS.md and the README)
 bench-align: $(STAMP)
 	$(BIN)/python bench/bench_align.py
+
+bench-train: $(STAMP)
+	$(BIN)/python bench/bench_train.py
+
+bench-decode: $(STAMP)
+	$(BIN)/python bench/bench_decode.py
+
+bench-service: $(STAMP)
+	$(BIN)/python bench/bench_service.py
 
 clean:
 	rm -rf $(VENV) $(DEMO_OUT) bench/work
