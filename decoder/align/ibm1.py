@@ -39,16 +39,14 @@ def model1_expected_counts(job: ShardJob) -> ExpectedCounts:
     cells = layout.load_cells()
     posteriors = np.empty(layout.num_cells, dtype=np.float64)
     log_likelihood, num_tokens = 0.0, 0
-    for bucket in layout.buckets:
-        bucket_cells = layout.bucket_cells(cells, bucket)
-        width = bucket_cells.shape[2]
-        values = probabilities.take(bucket_cells.reshape(-1, width))
+    for width, start, rows in layout.width_runs():
+        run_cells = cells[start:start + rows * width].reshape(rows, width)
+        values = probabilities.take(run_cells)
         totals = values.sum(axis=1)
-        out = posteriors[bucket.start:bucket.start + values.size].reshape(values.shape)
-        np.divide(values, totals[:, None], out=out)
+        np.divide(values, totals[:, None], out=posteriors[start:start + values.size].reshape(values.shape))
         # log p(e | f) = sum_j log sum_i t(e_j | f_i) - J log(I + 1)
-        log_likelihood += float(np.log(totals).sum()) - totals.size * np.log(width)
-        num_tokens += totals.size
+        log_likelihood += float(np.log(totals).sum()) - rows * np.log(width)
+        num_tokens += rows
     counts = np.bincount(cells, weights=posteriors, minlength=len(probabilities))
     return ExpectedCounts(counts, log_likelihood, num_tokens)
 

@@ -50,7 +50,21 @@ class ShardLayout:
     buckets: tuple[Bucket, ...]
 
     def load_cells(self) -> npt.NDArray[np.int32]:
-        return np.load(self.cells_path, mmap_mode="r")
+        """The cells, memory-mapped, as a plain ndarray view (slicing an np.memmap subclass costs far more)."""
+        return np.asarray(np.load(self.cells_path, mmap_mode="r"))
+
+    def width_runs(self) -> list[tuple[int, int, int]]:
+        """(width, start, number of rows) of consecutive buckets with one source length: their cells form one
+        (rows, width) matrix, since buckets are sorted by (I, J)."""
+        runs: list[tuple[int, int, int]] = []
+        for bucket in self.buckets:
+            width = bucket.source_length + self.num_null
+            rows = bucket.num_pairs * bucket.target_length
+            if runs and runs[-1][0] == width and runs[-1][1] + runs[-1][2] * width == bucket.start:
+                runs[-1] = (width, runs[-1][1], runs[-1][2] + rows)
+            else:
+                runs.append((width, bucket.start, rows))
+        return runs
 
     def bucket_cells(self, cells: npt.NDArray[np.int32], bucket: Bucket) -> npt.NDArray[np.int32]:
         width = bucket.source_length + self.num_null

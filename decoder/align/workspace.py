@@ -24,6 +24,8 @@ from decoder.executor import Executor, SerialExecutor
 from decoder.segment_arrays import ParallelArrays, unique_sorted
 
 Result = TypeVar("Result")
+# Bounds one E-step job's memory: 4 bytes of cell and 8 of posterior per cell, i.e. about 190 MB per shard.
+MAX_CELLS_PER_SHARD = 16_000_000
 
 
 @dataclass(frozen=True, slots=True)
@@ -78,7 +80,10 @@ class CellWorkspace:
         self.num_pairs = len(corpus)
         self.directory = Path(tempfile.mkdtemp(prefix="phrasework-align-", dir=parent_dir))
         self._version = 0
-        num_shards = num_shards or max(1, 4 * self.executor.num_workers)
+        if num_shards is None:
+            workers = self.executor.num_workers
+            total_cells = int(((corpus.source.lengths + self.num_null) * corpus.target.lengths).sum())
+            num_shards = max(1 if workers == 1 else 2 * workers, -(-total_cells // MAX_CELLS_PER_SHARD))
         bounds = corpus.shard_bounds(num_shards)
         self.shard_bounds = bounds
         shards = [corpus.slice(start, stop) for start, stop in bounds]
