@@ -9,7 +9,7 @@ global set before the pool forks, so the memory-mapped model is shared, not copi
 from __future__ import annotations
 
 import json
-from collections.abc import Iterable, Iterator
+from collections.abc import Iterable, Iterator, Sequence
 from dataclasses import asdict, dataclass
 from itertools import islice
 
@@ -111,3 +111,26 @@ def translate_lines(
             return
         for results in executor.map(translate_batch, batches):
             yield from results
+
+
+@dataclass(frozen=True, slots=True)
+class NBestJob:
+    segments: tuple[str, ...]
+    options: TranslationOptions
+
+
+def n_best_batch(job: NBestJob) -> list[SegmentTranslation]:
+    """The map step of tuning and evaluation: full results for a batch of segments."""
+    translator = _worker_translator
+    if translator is None:
+        raise RuntimeError("use_translator() was not called before translating")
+    return translator.translate(job.segments, job.options)
+
+
+def translate_all(segments: Sequence[str], options: TranslationOptions, executor: Executor | None = None,
+                  batch_size: int = BATCH_SIZE) -> list[SegmentTranslation]:
+    """Results for every segment, in order, batches spread over the executor's workers."""
+    executor = executor or SerialExecutor()
+    jobs = [NBestJob(tuple(segments[start:start + batch_size]), options)
+            for start in range(0, len(segments), batch_size)]
+    return [result for batch in executor.map(n_best_batch, jobs) for result in batch]

@@ -214,6 +214,43 @@ def command_translate(args: argparse.Namespace) -> int:
     return 1 if failures else 0
 
 
+def _read_lines(path: Path) -> list[str]:
+    from decoder.corpus.lines import iter_lines
+
+    return [text for _, text in iter_lines(path)]
+
+
+def command_tune(args: argparse.Namespace) -> int:
+    from decoder.tuning.model_tuning import tune_model
+
+    sources, references = _read_lines(args.dev_source), _read_lines(args.dev_reference)
+    if len(sources) != len(references):
+        raise DecoderError(f"{args.dev_source} has {len(sources)} lines but {args.dev_reference} has "
+                           f"{len(references)}; they must be line-aligned")
+    result, plot = tune_model(args.model, sources, references, method=args.method, max_iterations=args.iterations,
+                              n_best=args.n_best, workers=args.workers, seed=args.seed, show_progress=True)
+    for record in result.history:
+        print(f"iteration {record.iteration}: dev BLEU {100 * record.dev_bleu:.2f} "
+              f"({record.num_pool_entries} pooled hypotheses, {record.seconds:.1f} s)", file=sys.stderr)
+    print(f"best: iteration {result.best_iteration + 1}, dev BLEU {100 * result.best_dev_bleu:.2f}; stopped: "
+          f"{result.stop_reason}; weights written to {args.model / 'manifest.json'}; plot {plot}", file=sys.stderr)
+    return 0
+
+
+def command_evaluate(args: argparse.Namespace) -> int:
+    import json
+
+    from decoder.evaluation import evaluate_model
+
+    sources, references = _read_lines(args.source), _read_lines(args.reference)
+    report = evaluate_model(args.model, sources, references, workers=args.workers)
+    if args.json:
+        print(json.dumps(report.to_dict(), ensure_ascii=False))
+    else:
+        print("\n".join(report.lines()))
+    return 0
+
+
 def build_parser() -> argparse.ArgumentParser:
     parser = argparse.ArgumentParser(prog="phrasework", description="Statistical phrase-based machine translation.")
     commands = parser.add_subparsers(dest="command", required=True, metavar="COMMAND")
@@ -263,6 +300,28 @@ def build_parser() -> argparse.ArgumentParser:
     translate.add_argument("--weight", action="append", default=[], metavar="NAME=VALUE",
                            help="override one feature weight (repeatable)")
     translate.set_defaults(handler=command_translate)
+
+    tune = commands.add_parser("tune", help="tune the feature weights on a dev set (MERT or PRO)",
+                               description="Decodes the dev set repeatedly, optimises the weights and writes the best "
+                                           "ones into the model's manifest (with the previous weights and a history) "
+                                           "and a plot of dev BLEU per iteration (tuning.png) next to it.")
+    tune.add_argument("--model", required=True, type=Path, metavar="MODEL_DIR")
+    tune.add_argument("--dev-source", required=True, type=Path)
+    tune.add_argument("--dev-reference", required=True, type=Path)
+    tune.add_argument("--method", choices=("mert", "pro"), default="mert")
+    tune.add_argument("--iterations", type=int, default=10, help="at most this many decodes (default 10)")
+    tune.add_argument("--n-best", type=int, default=100)
+    tune.add_argument("--workers", type=int, default=os.cpu_count() or 1)
+    tune.add_argument("--seed", type=int, default=0)
+    tune.set_defaults(handler=command_tune)
+
+    evaluate = commands.add_parser("evaluate", help="translate a test set and report BLEU, chrF and more")
+    evaluate.add_argument("--model", required=True, type=Path, metavar="MODEL_DIR")
+    evaluate.add_argument("--source", required=True, type=Path)
+    evaluate.add_argument("--reference", required=True, type=Path)
+    evaluate.add_argument("--workers", type=int, default=1)
+    evaluate.add_argument("--json", action="store_true", help="one JSON object instead of text")
+    evaluate.set_defaults(handler=command_evaluate)
 
     phrases = commands.add_parser("phrases", help="print the phrase pairs of a source phrase")
     phrases.add_argument("model", type=Path, metavar="MODEL_DIR")

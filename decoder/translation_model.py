@@ -7,6 +7,8 @@ Array names in the directory carry a prefix per part (``phrases.``, ``lm.``, ``s
 
 from __future__ import annotations
 
+import json
+import os
 from collections.abc import Mapping
 from dataclasses import dataclass
 from pathlib import Path
@@ -110,3 +112,22 @@ def load_translation_model(path: str | Path, verify: bool = True) -> Translation
         phrase_table=PhraseTable.from_arrays(_unprefixed("phrases", arrays)),
         language_model=LanguageModel.from_arrays(_unprefixed("lm", arrays)),
         truecaser=Truecaser.from_arrays(truecaser["blob"], truecaser["offsets"]))
+
+
+def update_manifest(model_dir: str | Path, changes: Mapping[str, Any]) -> None:
+    """Replace top-level manifest keys in one atomic step (write a sibling file, then rename over the old one):
+    an interrupted update leaves the previous manifest. Array entries and the format version cannot change."""
+    path = Path(model_dir) / "manifest.json"
+    load_model(model_dir, verify=False)  # must be a model directory now
+    manifest = json.loads(path.read_text(encoding="utf-8"))
+    forbidden = {"arrays", "format_version"} & set(changes)
+    if forbidden:
+        raise ValueError(f"cannot change {', '.join(sorted(forbidden))}")
+    manifest.update(changes)
+    temporary = path.with_name(f".manifest.{os.getpid()}.tmp")
+    with open(temporary, "w", encoding="utf-8") as out:
+        json.dump(manifest, out, indent=2, ensure_ascii=False, allow_nan=False)
+        out.write("\n")
+        out.flush()
+        os.fsync(out.fileno())
+    os.replace(temporary, path)

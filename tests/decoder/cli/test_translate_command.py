@@ -12,7 +12,10 @@ LINES = [b"Open the blue report.", b"", b"Saved %d files to {folder}.", b"\xff\x
          b"Click Save.\x07", b"Click <b>Save</b>."]
 
 
-def run_translate(model_dir, *extra, stdin=b"\n".join(LINES) + b"\n"):
+ALL_LINES = b"\n".join(LINES) + b"\n"
+
+
+def run_translate(model_dir, *extra, stdin=ALL_LINES):
     return subprocess.run([sys.executable, "-m", "decoder.cli", "translate", "--model", str(model_dir), *extra],
                           input=stdin, capture_output=True, cwd=REPO, timeout=300)
 
