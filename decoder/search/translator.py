@@ -23,7 +23,7 @@ from decoder.search.n_best import Derivation, best_derivation, n_best_derivation
 from decoder.search.options import OptionBuilder, OptionKind, OptionSet, TranslationOption
 from decoder.search.settings import NBestEntry, PhraseSpan, SegmentTranslation, TranslationOptions, WordLink
 from decoder.search.stack_search import SearchResult, StackSearch
-from decoder.text.casing import restore_casing
+from decoder.text.casing import copy_source_capitals, restore_casing
 from decoder.text.detokenizer import detokenize
 from decoder.text.pipeline import PreparedSegment, prepare_segment
 from decoder.text.protection import restore
@@ -146,7 +146,8 @@ class Translator:
                 links.append((start + source_offset, first_target + target_offset))
             positions.extend(aligned.get(index) for index in range(len(output) - first_target))
             phrase_bounds.append((start, option.end + offset, first_target, len(output)))
-        cased = restore_casing(output, prepared.cased_tokens, self.model.truecaser)
+        cased = copy_source_capitals(restore_casing(output, prepared.cased_tokens, self.model.truecaser), positions,
+                                     prepared.cased_tokens)
         restored = restore(cased, prepared.protected, positions)
         final_tokens = list(restored) + [original.text for original in restored.missing]
         text = detokenize(final_tokens, self.model.target_language)

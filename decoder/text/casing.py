@@ -155,3 +155,24 @@ def restore_casing(
     if index is not None and tokens[index] not in CLASS_TOKENS and tokens[index][:1].isalpha():
         tokens[index] = _capitalise(tokens[index])
     return tokens
+
+
+def copy_source_capitals(
+    output_tokens: Sequence[str], source_positions: Sequence[int | None], source_tokens_original: Sequence[str]
+) -> list[str]:
+    """Capitalise output words aligned to a capitalised source word inside the sentence.
+
+    UI text capitalises names of buttons and menus ("click Save" -> "haga clic en Guardar"): a word that is
+    capitalised in the source although it does not start a sentence carries that capital to the word it
+    translates to, if that word is lowercase. Sentence-initial source words are left to ``restore_casing``."""
+    tokens = list(output_tokens)
+    sentence_starts = {index for index, token in enumerate(source_tokens_original)
+                       if index == _first_content_index(source_tokens_original)
+                       or (index > 0 and source_tokens_original[index - 1] in SENTENCE_END_TOKENS)}
+    for index, (token, position) in enumerate(zip(tokens, source_positions, strict=True)):
+        if position is None or position in sentence_starts or token in CLASS_TOKENS:
+            continue
+        source = source_tokens_original[position]
+        if source[:1].isupper() and not source.isupper() and token[:1].isalpha() and token[:1].islower():
+            tokens[index] = _capitalise(token)
+    return tokens

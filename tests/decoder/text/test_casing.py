@@ -1,7 +1,7 @@
 import numpy as np
 import pytest
 
-from decoder.text.casing import Truecaser, lowercase, restore_casing
+from decoder.text.casing import Truecaser, copy_source_capitals, lowercase, restore_casing
 from decoder.text.protection import CLOSING_TAG, NUMBER, OPENING_TAG, PLACEHOLDER, URL
 
 # A small target-side corpus (tokenized, original casing) about the invented Zentrix app.
@@ -122,3 +122,15 @@ def test_restore_casing(truecaser, output, source, expected):
 def test_restore_casing_without_truecaser_only_capitalises_the_first_word():
     assert restore_casing(["zentrix", "abre", "save"], ["Zentrix", "opens"], None) == ["Zentrix", "abre", "save"]
     assert restore_casing(["zentrix"], ["zentrix"], None) == ["zentrix"]
+
+
+# Hand-made cases of the UI-text rule in copy_source_capitals: a capitalised source word that does not start a
+# sentence passes its capital to the (lowercase) word aligned to it.
+@pytest.mark.parametrize(("output", "positions", "source", "expected"), [
+    (["haga", "clic", "en", "guardar"], [0, 0, 0, 1], ["Click", "Save"], ["haga", "clic", "en", "Guardar"]),
+    (["abra", "el", "menú"], [0, None, 2], ["Open", "the", "menu"], ["abra", "el", "menú"]),
+    (["pulse", "ok"], [0, 1], ["Press", "OK"], ["pulse", "ok"]),                        # all capitals: left alone
+    (["listo", ".", "abra"], [0, 1, 2], ["Done", ".", "Open"], ["listo", ".", "abra"]),  # a new sentence
+])
+def test_copy_source_capitals(output, positions, source, expected):
+    assert copy_source_capitals(output, positions, source) == expected
