@@ -26,6 +26,7 @@ from decoder.search.settings import TranslationOptions
 from decoder.training_data import read_training_data
 
 EXIT_USAGE = 2
+DEFAULT_GLOSSARY_DIR = Path("glossaries")
 
 
 def _add_corpus_arguments(parser: argparse.ArgumentParser) -> None:
@@ -47,6 +48,16 @@ def _add_alignment_arguments(parser: argparse.ArgumentParser) -> None:
     parser.add_argument("--model1-iterations", type=int, default=5)
     parser.add_argument("--hmm-iterations", type=int, default=5)
     parser.add_argument("--symmetrize", choices=SYMMETRIZATION_METHODS, default="grow-diag-final-and")
+
+
+def _add_glossary_arguments(parser: argparse.ArgumentParser, with_mode: bool = True) -> None:
+    parser.add_argument("--glossary", action="append", metavar="NAME_OR_FILE",
+                        help="a glossary by name (a file in the glossary folder) or path; repeatable")
+    parser.add_argument("--glossary-dir", type=Path, help=f"where glossary names are looked up "
+                                                          f"(default {DEFAULT_GLOSSARY_DIR})")
+    if with_mode:
+        parser.add_argument("--term-mode", choices=("enforce", "prefer", "off"), default="enforce",
+                            help="how matched terms are applied (entries may set their own)")
 
 
 def _alignment_settings(args: argparse.Namespace) -> AlignmentSettings:
@@ -184,7 +195,17 @@ def _translation_options(args: argparse.Namespace, model) -> TranslationOptions:
     return TranslationOptions(n_best=args.n_best, search=search, weights=_parse_weights(args.weight) or None,
                               include_segmentation="segmentation" in include,
                               include_alignment="alignment" in include,
-                              max_segment_tokens=args.max_segment_tokens)
+                              max_segment_tokens=args.max_segment_tokens,
+                              glossaries=_load_glossaries(args, model.source_language, model.target_language),
+                              term_mode=args.term_mode)
+
+
+def _load_glossaries(args: argparse.Namespace, source_language: str, target_language: str) -> tuple:
+    from decoder.terminology import load_glossary
+
+    search_dirs = (args.glossary_dir,) if getattr(args, "glossary_dir", None) else (DEFAULT_GLOSSARY_DIR,)
+    return tuple(load_glossary(name, source_language, target_language, search_dirs=search_dirs)
+                 for name in getattr(args, "glossary", None) or ())
 
 
 def command_translate(args: argparse.Namespace) -> int:
@@ -241,14 +262,32 @@ def command_evaluate(args: argparse.Namespace) -> int:
     import json
 
     from decoder.evaluation import evaluate_model
+    from decoder.translation_model import load_translation_model
 
     sources, references = _read_lines(args.source), _read_lines(args.reference)
-    report = evaluate_model(args.model, sources, references, workers=args.workers)
+    model = load_translation_model(args.model)
+    glossaries = _load_glossaries(args, model.source_language, model.target_language)
+    options = TranslationOptions(glossaries=glossaries, term_mode=args.term_mode)
+    report = evaluate_model(args.model, sources, references, workers=args.workers, options=options)
     if args.json:
         print(json.dumps(report.to_dict(), ensure_ascii=False))
     else:
         print("\n".join(report.lines()))
     return 0
+
+
+def command_glossary_check(args: argparse.Namespace) -> int:
+    from decoder.terminology import check_glossary
+
+    check = check_glossary(args.file, args.source_lang, args.target_lang)
+    print(f"{check.path}: glossary {check.name!r}")
+    print(f"  entries: {check.num_entries} ({check.num_multi_word_entries} multi-word, "
+          f"{check.num_case_sensitive_entries} case-sensitive)")
+    print(f"  target terms: {check.num_target_alternatives}; forbidden (deprecated/superseded): "
+          f"{check.num_forbidden_terms}; entries that can never match: {check.num_unmatchable_entries}")
+    for warning in check.warnings:
+        print(f"  warning: {warning.origin}: {warning.message}")
+    return 0 if check.is_clean else 1
 
 
 def build_parser() -> argparse.ArgumentParser:
@@ -299,6 +338,7 @@ def build_parser() -> argparse.ArgumentParser:
                            help="longer segments are split at punctuation and translated piece by piece")
     translate.add_argument("--weight", action="append", default=[], metavar="NAME=VALUE",
                            help="override one feature weight (repeatable)")
+    _add_glossary_arguments(translate)
     translate.set_defaults(handler=command_translate)
 
     tune = commands.add_parser("tune", help="tune the feature weights on a dev set (MERT or PRO)",
@@ -321,7 +361,16 @@ def build_parser() -> argparse.ArgumentParser:
     evaluate.add_argument("--reference", required=True, type=Path)
     evaluate.add_argument("--workers", type=int, default=1)
     evaluate.add_argument("--json", action="store_true", help="one JSON object instead of text")
+    _add_glossary_arguments(evaluate)
     evaluate.set_defaults(handler=command_evaluate)
+
+    glossary = commands.add_parser("glossary", help="glossary tools")
+    glossary_commands = glossary.add_subparsers(dest="glossary_command", required=True, metavar="COMMAND")
+    check = glossary_commands.add_parser("check", help="validate a glossary file (TSV, CSV or TBX) and show statistics")
+    check.add_argument("file", type=Path)
+    check.add_argument("--source-lang", required=True, help="BCP 47 tag of the source language")
+    check.add_argument("--target-lang", required=True, help="BCP 47 tag of the target language")
+    check.set_defaults(handler=command_glossary_check)
 
     phrases = commands.add_parser("phrases", help="print the phrase pairs of a source phrase")
     phrases.add_argument("model", type=Path, metavar="MODEL_DIR")

@@ -11,17 +11,16 @@ from dataclasses import dataclass, field
 from enum import StrEnum
 
 from decoder.errors import ConfigurationError
+from decoder.terminology.glossary import Glossary, TermMode
+from decoder.terminology.report import TermReportItem
+
+__all__ = ["NBestEntry", "PhraseSpan", "SearchAlgorithm", "SearchSettings", "SegmentTranslation", "TermMode",
+           "TranslationOptions", "WordLink"]
 
 
 class SearchAlgorithm(StrEnum):
     STACK = "stack"  # expand every hypothesis with every option (then prune)
     CUBE = "cube"    # cube pruning (Huang & Chiang 2007): at most ``cube_pop_limit`` pops per stack
-
-
-class TermMode(StrEnum):
-    ENFORCE = "enforce"
-    PREFER = "prefer"
-    OFF = "off"
 
 
 @dataclass(frozen=True, slots=True)
@@ -68,10 +67,15 @@ class TranslationOptions:
     include_segmentation: bool = False
     include_alignment: bool = False
     max_segment_tokens: int = 150  # longer segments are split at sentence or clause punctuation
+    glossaries: tuple[Glossary, ...] = ()
+    term_mode: TermMode = TermMode.ENFORCE  # for entries without a mode of their own
+    inflection_tolerance: bool = False       # match plural -s/-es forms of source terms too
 
     def __post_init__(self) -> None:
         if not 1 <= self.n_best <= 1000:
             raise ConfigurationError("n_best must be between 1 and 1000")
+        object.__setattr__(self, "term_mode", TermMode(self.term_mode))
+        object.__setattr__(self, "glossaries", tuple(self.glossaries))
 
 
 @dataclass(frozen=True, slots=True)
@@ -109,4 +113,4 @@ class SegmentTranslation:
     translation: str
     n_best: tuple[NBestEntry, ...]
     num_pieces: int = 1  # >1 when a long segment was split and translated piece by piece
-    terms: tuple = ()    # term reports (decoder.terminology), empty without glossaries
+    terms: tuple[TermReportItem, ...] = ()  # one per matched term (decoder.terminology.report), source order

@@ -13,16 +13,20 @@ The model is read-only, so one Translator may serve many threads; each call keep
 from __future__ import annotations
 
 from collections.abc import Mapping, Sequence
-from dataclasses import dataclass
+from dataclasses import dataclass, replace
 
 import numpy as np
 
+from decoder.search.constraints import ConstraintApplier, glossary_positions
 from decoder.search.features import FEATURE_NAMES, feature_dict, weight_vector
 from decoder.search.hypothesis import ExpansionScorer, derivation_features
 from decoder.search.n_best import Derivation, best_derivation, n_best_derivations
 from decoder.search.options import OptionBuilder, OptionKind, OptionSet, TranslationOption
 from decoder.search.settings import NBestEntry, PhraseSpan, SegmentTranslation, TranslationOptions, WordLink
 from decoder.search.stack_search import SearchResult, StackSearch
+from decoder.terminology.glossary import Glossary, TermMode
+from decoder.terminology.matching import match_terms
+from decoder.terminology.report import build_term_report
 from decoder.text.casing import copy_source_capitals, restore_casing
 from decoder.text.detokenizer import detokenize
 from decoder.text.pipeline import PreparedSegment, prepare_segment
@@ -65,8 +69,13 @@ class Translator:
     def weights(self, overrides: Mapping[str, float] | None = None) -> np.ndarray:
         return weight_vector(self.model.weights, overrides)
 
-    def translate(self, segments: Sequence[str], options: TranslationOptions = TranslationOptions()
+    def translate(self, segments: Sequence[str], options: TranslationOptions = TranslationOptions(),
+                  glossaries: Sequence[Glossary] | None = None, term_mode: TermMode | str | None = None
                   ) -> list[SegmentTranslation]:
+        """One result per segment, in order. ``glossaries`` and ``term_mode`` override those of ``options``."""
+        if glossaries is not None or term_mode is not None:
+            options = replace(options, glossaries=tuple(glossaries if glossaries is not None else options.glossaries),
+                              term_mode=TermMode(term_mode) if term_mode is not None else options.term_mode)
         weights = self.weights(options.weights)
         builder = self.builder(weights)
         return [self.translate_segment(segment, options, weights, builder) for segment in segments]
@@ -89,10 +98,16 @@ class Translator:
             return SegmentTranslation(prepared.text, "", (empty,))
         search_settings = options.search
         pieces = split_points(tokens, options.max_segment_tokens)
+        terms = match_terms(prepared, options.glossaries, options.inflection_tolerance) if options.glossaries else None
+        applier = ConstraintApplier(builder, self.model.target_language)
+        forbidden = sorted({text for glossary in options.glossaries for text in glossary.forbidden_targets})
         results = []
         for start, end in pieces:
             option_set = builder.collect(tokens[start:end], search_settings.max_options_per_span,
                                          search_settings.max_phrase_length)
+            if terms is not None:
+                applier.apply(option_set, tokens[start:end], terms.matches, options.term_mode, start,
+                              forbidden if options.term_mode is not TermMode.OFF else ())
             found = self.search_piece(option_set, options, weights)
             size = options.n_best if len(pieces) == 1 else 1
             if size == 1:
@@ -106,7 +121,9 @@ class Translator:
                 raise RuntimeError("the search found no complete translation")
             results.append(_PieceResult(derivations, end - start, start))
         entries = self._entries(prepared, results, options)
-        return SegmentTranslation(prepared.text, entries[0].text, tuple(entries), num_pieces=len(pieces))
+        report = build_term_report(terms, entries[0].text, options.term_mode).items if terms is not None else ()
+        return SegmentTranslation(prepared.text, entries[0].text, tuple(entries), num_pieces=len(pieces),
+                                  terms=report)
 
     def _entries(self, prepared: PreparedSegment, pieces: list[_PieceResult], options: TranslationOptions
                  ) -> list[NBestEntry]:
@@ -148,6 +165,12 @@ class Translator:
             phrase_bounds.append((start, option.end + offset, first_target, len(output)))
         cased = copy_source_capitals(restore_casing(output, prepared.cased_tokens, self.model.truecaser), positions,
                                      prepared.cased_tokens)
+        first_word = next((index for index, token in enumerate(output) if any(c.isalnum() for c in token)), None)
+        for index in glossary_positions(placed):  # glossary terms keep the glossary's casing ...
+            capitalised = cased[index][:1].isupper() and not output[index][:1].isupper()
+            cased[index] = output[index]
+            if capitalised and index == first_word:  # ... except a capital at the start of the output
+                cased[index] = output[index][:1].upper() + output[index][1:]
         restored = restore(cased, prepared.protected, positions)
         final_tokens = list(restored) + [original.text for original in restored.missing]
         text = detokenize(final_tokens, self.model.target_language)
