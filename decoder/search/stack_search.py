@@ -4,7 +4,9 @@ recombination, histogram and threshold pruning, a distortion limit, and cube pru
 Stacks hold hypotheses by number of covered source words. ``plain`` expansion takes every surviving hypothesis
 of stack k and every option it may append. ``cube`` fills stack k from the earlier stacks instead: hypotheses of
 one coverage (best first) and the options of one span (best first) form a grid whose corner goes on a heap; each
-pop adds one hypothesis and pushes its two neighbours, until ``cube_pop_limit`` pops.
+pop adds one hypothesis and pushes its two neighbours, until ``cube_pop_limit`` pops, or until the best item
+left falls outside the threshold beam, or below the ``stack_size``-th best popped (it could not survive
+histogram pruning unless a later neighbour were better, which cube pruning does not wait for either).
 
 Distortion limit d >= 0: a phrase may start at most d words from where the previous one ended, and a phrase may
 not leave the first uncovered word more than d words behind its end (so that word stays reachable). d = 0 is
@@ -30,6 +32,11 @@ class SearchResult:
     complete: list[Hypothesis]
     num_expanded: int
     num_recombined: int
+
+
+# Cube pruning stops early once the stack holds ``stack_size`` hypotheses and the best item left is this much
+# (log domain) below the worst of them: neighbours pushed later rarely climb that far.
+FULL_STACK_MARGIN = 1.0
 
 
 class _Stack:
@@ -185,12 +192,21 @@ class StackSearch:
                         if allowed:
                             grids.append((allowed, options))
             queue = _CubeQueue(self, grids)
+            stack, limit = stacks[size], self.settings.stack_size
+            kept_totals: list[float] = []  # min-heap of the best ``stack_size`` totals popped so far
             pops = 0
-            while pops < self.settings.cube_pop_limit:
+            while pops < self.settings.cube_pop_limit and queue.heap:
+                best_left = -queue.heap[0][0]
+                if best_left < stack.best_total - stack.beam_width:
+                    break  # everything left is outside the threshold beam
+                if len(kept_totals) >= limit and best_left < kept_totals[0] - FULL_STACK_MARGIN:
+                    break  # the stack is full and nothing left could enter its best ``stack_size``
                 popped = queue.pop()
-                if popped is None:
-                    break
-                stacks[size].add(popped)
+                stack.add(popped)
+                if len(kept_totals) < limit:
+                    heapq.heappush(kept_totals, popped.total)
+                elif popped.total > kept_totals[0]:
+                    heapq.heapreplace(kept_totals, popped.total)
                 pops += 1
             survivors[size] = stacks[size].pruned(self.settings.stack_size)
 
