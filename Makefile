@@ -6,7 +6,7 @@ BIN := $(VENV)/bin
 STAMP := $(VENV)/.installed
 DEMO_OUT := demo_models/build
 
-.PHONY: demo test test-all lint format bench-align bench-train bench-decode bench-service clean
+.PHONY: demo serve test test-all lint format bench-align bench-train bench-decode bench-service clean
 
 $(STAMP): pyproject.toml
 	$(PYTHON) -m venv $(VENV)
@@ -25,6 +25,11 @@ demo: $(STAMP) $(DEMO_MODEL)/manifest.json
 $(DEMO_MODEL)/manifest.json: $(STAMP) demo_models/corpus/train.en demo_models/corpus/train.es
 	$(BIN)/phrasework train --source-file demo_models/corpus/train.en --target-file demo_models/corpus/train.es \
 		--source-lang en --target-lang es --out $(DEMO_MODEL) --force
+
+## serve: set up, train the demo model on first use, and serve it on http://127.0.0.1:8080 (Ctrl+C stops)
+serve: $(STAMP) $(DEMO_MODEL)/manifest.json
+	$(BIN)/phrasework serve --model $(DEMO_MODEL) --glossary-dir glossaries \
+		--database $(DEMO_OUT)/glossaries.sqlite3 --bind 127.0.0.1:8080 --workers 2
 
 ## test: the default test suite (what CI runs)
 test: $(STAMP)

@@ -5,7 +5,8 @@ order, cycled. The model is an en->fr model trained by ``phrasework train`` on b
 into bench/work/ if missing). Measured in one run:
 
 - the library's own throughput on the same segments and the same cores: ``Translator.translate`` one segment
-  per call, in 1 process and in as many processes as the server has workers, for the same duration;
+  per call, in as many processes as the load level keeps workers busy, for the same duration, measured just
+  before each level (the machine's load drifts; adjacent runs see the same);
 - the service at concurrency 1, 4 and 16 (a thread pool, one requests.Session per thread, a fixed duration
   per level): requests per second, p50/p95/p99 latency, errors (non-200 answers and failed connections);
 - memory of each worker from /proc after the load: RSS, PSS and private bytes (what one more worker adds;
@@ -14,7 +15,7 @@ into bench/work/ if missing). Measured in one run:
 The load generator runs on the same machine and competes for its cores, which lowers the HTTP numbers
 somewhat; the ratio to the library is therefore conservative.
 
-    python bench/bench_service.py [--duration 20] [--workers 2] [--concurrency 1 4 16]
+    python bench/bench_service.py [--duration 15] [--workers 2] [--concurrency 1 4 16]
 
 Writes the "service" section of bench/RESULTS.md and the README rows between the markers
 <!-- begin bench service --> and <!-- end bench service -->.
@@ -237,7 +238,7 @@ def worker_memory(master_pid: int) -> list[dict]:
 
 def main() -> None:
     parser = argparse.ArgumentParser(description=__doc__.split("\n\n")[0])
-    parser.add_argument("--duration", type=float, default=20.0, help="seconds per load level and library run")
+    parser.add_argument("--duration", type=float, default=15.0, help="seconds per load level and library run")
     parser.add_argument("--workers", type=int, default=2)
     parser.add_argument("--concurrency", type=int, nargs="+", default=[1, 4, 16])
     args = parser.parse_args()
@@ -245,49 +246,55 @@ def main() -> None:
     model_dir = ensure_model(folder)
     segments = bench_segments(folder)
     print(f"{len(segments)} test segments of {MIN_WORDS}-{MAX_WORDS} words", file=sys.stderr)
-    library_one = library_throughput(model_dir, segments, args.duration, 1)
-    library_all = library_throughput(model_dir, segments, args.duration, args.workers)
-    print(f"library: {library_one:.2f} segments/s (1 process), {library_all:.2f} ({args.workers})", file=sys.stderr)
     run_dir = WORK_DIR / "service-run"
     run_dir.mkdir(parents=True, exist_ok=True)
+    load_before = os.getloadavg()[0]
     process, base_url = start_server(model_dir, args.workers, run_dir)
     try:
         load_level(base_url, segments, args.workers, 3.0)  # warm-up: every worker pages in the model
         levels = []
         for concurrency in args.concurrency:
-            level = load_level(base_url, segments, concurrency, args.duration)
+            # The library on the same cores, measured right before the level so that both see the same
+            # machine load: as many processes as the level keeps workers busy.
+            processes = min(concurrency, args.workers)
+            level = {
+                "library": library_throughput(model_dir, segments, args.duration, processes),
+                "library_processes": processes,
+            }
+            level |= load_level(base_url, segments, concurrency, args.duration)
             print(f"concurrency {concurrency}: {level}", file=sys.stderr)
             levels.append(level)
         memory = worker_memory(process.pid)
     finally:
         process.terminate()
         process.wait(timeout=60)
-    report(args, segments, library_one, library_all, levels, memory)
+    report(args, segments, levels, memory, (load_before, os.getloadavg()[0]))
 
 
-def report(args, segments, library_one, library_all, levels, memory) -> None:
+def report(args, segments, levels, memory, load_average) -> None:
     where = f"{machine()}, commit {commit()}"
     rss = " / ".join(f"{worker['rss_mib']:.0f}" for worker in memory)
     private = " / ".join(f"{worker['private_mib']:.0f}" for worker in memory)
     lines = [
         "## HTTP service (bench/bench_service.py)",
         "",
-        f"`python bench/bench_service.py --duration {args.duration:g} --workers {args.workers}` on {where}. "
-        f"{len(segments)} single-segment requests of {MIN_WORDS}-{MAX_WORDS} words from bench/data/ui-en-fr/test.en, "
-        f"cycled; model `phrasework train` on bench/data/ui-en-fr; default search settings; {args.workers} sync "
-        "workers; load generator on the same machine.",
+        f"`python bench/bench_service.py --duration {args.duration:g} --workers {args.workers}` on {where}; "
+        f"1-minute load average {load_average[0]:.1f} before and {load_average[1]:.1f} after. {len(segments)} "
+        f"single-segment requests of {MIN_WORDS}-{MAX_WORDS} words from bench/data/ui-en-fr/test.en, cycled; model "
+        f"`phrasework train` on bench/data/ui-en-fr; default search settings; {args.workers} sync workers; the load "
+        "generator runs on the same machine. The library column is `Translator.translate` on the same segments, "
+        "one per call, in as many processes as the level keeps workers busy, measured just before the level.",
         "",
-        f"Library, same segments: {library_one:.2f} segments/s in 1 process, {library_all:.2f} in {args.workers} "
-        "processes (the server's cores).",
-        "",
-        "| concurrency | requests/s | HTTP / library | p50 ms | p95 ms | p99 ms | p99 / p50 | errors |",
-        "|---|---|---|---|---|---|---|---|",
+        "| concurrency | requests/s | library segments/s (processes) | HTTP / library | p50 ms | p95 ms | p99 ms "
+        "| p99 / p50 | errors |",
+        "|---|---|---|---|---|---|---|---|---|",
     ]
     for level in levels:
         lines.append(
-            f"| {level['concurrency']} | {level['requests_per_second']:.2f} | "
-            f"{level['requests_per_second'] / library_all:.0%} | {level['p50_ms']:.0f} | {level['p95_ms']:.0f} | "
-            f"{level['p99_ms']:.0f} | {level['p99_ms'] / level['p50_ms']:.2f} | {level['errors']} |"
+            f"| {level['concurrency']} | {level['requests_per_second']:.2f} | {level['library']:.2f} "
+            f"({level['library_processes']}) | {level['requests_per_second'] / level['library']:.0%} | "
+            f"{level['p50_ms']:.0f} | {level['p95_ms']:.0f} | {level['p99_ms']:.0f} | "
+            f"{level['p99_ms'] / level['p50_ms']:.2f} | {level['errors']} |"
         )
     lines += [
         "",
@@ -307,7 +314,7 @@ def report(args, segments, library_one, library_all, levels, memory) -> None:
     for level in levels:
         rows.append(
             f"| {level['concurrency']} | {level['requests_per_second']:.2f} | "
-            f"{level['requests_per_second'] / library_all:.0%} | {level['p50_ms']:.0f} / "
+            f"{level['requests_per_second'] / level['library']:.0%} | {level['p50_ms']:.0f} / "
             f"{level['p95_ms']:.0f} / {level['p99_ms']:.0f} | {level['errors']} | {private} | "
             f"{args.workers} | {machine()} | {commit()} |"
         )

@@ -290,6 +290,13 @@ def command_glossary_check(args: argparse.Namespace) -> int:
     return 0 if check.is_clean else 1
 
 
+def command_serve(args: argparse.Namespace, extra: Sequence[str]) -> int:
+    """Hand over to the service launcher (``python -m service.launcher``), which execs gunicorn. The library does
+    not import the web layer; the launcher validates the arguments and prints its own errors."""
+    os.execv(sys.executable, [sys.executable, "-m", "service.launcher", *extra])
+    return 0  # not reached
+
+
 def build_parser() -> argparse.ArgumentParser:
     parser = argparse.ArgumentParser(prog="phrasework", description="Statistical phrase-based machine translation.")
     commands = parser.add_subparsers(dest="command", required=True, metavar="COMMAND")
@@ -372,6 +379,12 @@ def build_parser() -> argparse.ArgumentParser:
     check.add_argument("--target-lang", required=True, help="BCP 47 tag of the target language")
     check.set_defaults(handler=command_glossary_check)
 
+    serve = commands.add_parser(
+        "serve", add_help=False, help="serve models over HTTP (JSON REST, gunicorn)",
+        description="Arguments: --model MODEL_DIR [--model ...] [--glossary-dir DIR] [--database FILE] "
+                    "[--bind 127.0.0.1:8080] [--workers N] [--api-keys-file FILE]; see service/README.md.")
+    serve.set_defaults(handler=command_serve, passes_arguments_through=True)
+
     phrases = commands.add_parser("phrases", help="print the phrase pairs of a source phrase")
     phrases.add_argument("model", type=Path, metavar="MODEL_DIR")
     phrases.add_argument("--source", required=True, help="the source phrase (raw text; tokenized as in training)")
@@ -381,6 +394,9 @@ def build_parser() -> argparse.ArgumentParser:
 
 
 def main(argv: Sequence[str] | None = None) -> int:
+    argv = list(sys.argv[1:] if argv is None else argv)
+    if argv[:1] == ["serve"]:  # everything after "serve" belongs to the service launcher
+        return command_serve(argparse.Namespace(), argv[1:])
     args = build_parser().parse_args(argv)
     try:
         return args.handler(args)

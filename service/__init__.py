@@ -1,5 +1,5 @@
-"""HTTP layer of phrasework (thin: schemas, routes, glossary store, auth, limits, metrics).
+"""HTTP layer of phrasework (thin: schemas, routes, glossary store, auth, limits, metrics); see README.md here.
 
-It imports ``decoder``; ``decoder`` never imports it. The application factory arrives with the HTTP service
-issue; until then this package is intentionally empty.
+It imports ``decoder``; ``decoder`` never imports it. gunicorn loads ``service.wsgi:create_app()``; nothing
+is imported here, so ``python -m service.keys`` and ``python -m service.launcher`` start without Flask.
 """
