@@ -6,7 +6,7 @@ BIN := $(VENV)/bin
 STAMP := $(VENV)/.installed
 DEMO_OUT := demo_models/build
 
-.PHONY: demo serve test test-all lint format bench-align bench-train bench-decode bench-service clean
+.PHONY: demo serve test test-all lint format bench-align bench-train bench-decode bench-terms bench-service clean
 
 $(STAMP): pyproject.toml
 	$(PYTHON) -m venv $(VENV)
@@ -55,6 +55,9 @@ bench-train: $(STAMP)
 
 bench-decode: $(STAMP)
 	$(BIN)/python bench/bench_decode.py
+
+bench-terms: $(STAMP)
+	$(BIN)/python bench/bench_terms.py
 
 bench-service: $(STAMP)
 	$(BIN)/python bench/bench_service.py
