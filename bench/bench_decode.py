@@ -92,7 +92,7 @@ def main() -> None:
 
     step = max(1, len(sources) // args.sample)
     sample_sources, sample_references = sources[::step][:args.sample], references[::step][:args.sample]
-    _, wide_scores, _ = timed_translations(translator, sample_sources, WIDE)
+    wide_outputs, wide_scores, _ = timed_translations(translator, sample_sources, WIDE)
     grid = []
     configurations = [("stack", size, 0) for size in (10, 50, 200)] + \
                      [("cube", size, limit) for size in (50, 200) for limit in (100, 300, 1000)]
@@ -104,8 +104,7 @@ def main() -> None:
                      "segments_per_second": len(sample_sources) / sum(grid_latencies),
                      "search_error_rate": errors / len(sample_sources),
                      "bleu": sacrebleu.corpus_bleu(grid_outputs, [sample_references]).score})
-    wide_bleu = sacrebleu.corpus_bleu(timed_translations(translator, sample_sources, WIDE)[0],
-                                      [sample_references]).score
+    wide_bleu = sacrebleu.corpus_bleu(wide_outputs, [sample_references]).score
     plot_path = REPO / "bench" / "decode_speed_quality.png"
     write_plot(grid, plot_path)
 
