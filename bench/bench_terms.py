@@ -23,6 +23,7 @@ sys.path.insert(0, str(Path(__file__).resolve().parent.parent))
 
 from bench.bench_train import model_dir_for  # noqa: E402
 from bench.common import REPO, commit, machine, replace_readme_rows, replace_section, ui_corpus  # noqa: E402
+from decoder.errors import InvalidTextError  # noqa: E402
 from decoder.search.settings import TranslationOptions  # noqa: E402
 from decoder.search.translator import Translator  # noqa: E402
 from decoder.terminology import read_glossary_file, term_accuracy  # noqa: E402
@@ -35,7 +36,11 @@ MIN_TEST_AGREEMENT = 0.8  # share of test pairs with the source term whose refer
 
 
 def content_words(text: str, language: str) -> set[str]:
-    return {token for token in model_tokens(text, language) if token.isalpha() and len(token) >= 4}
+    try:
+        tokens = model_tokens(text, language)
+    except InvalidTextError:  # catalog strings with control characters: training drops them too
+        return set()
+    return {token for token in tokens if token.isalpha() and len(token) >= 4}
 
 
 def mine_glossary(folder: Path, language: str, wanted: int) -> list[tuple[str, str, int]]:

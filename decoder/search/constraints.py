@@ -2,8 +2,9 @@
 
 For each term the matcher found (``decoder.terminology``), by its mode (the entry's own, else the request's):
 
-- ``enforce``: every option overlapping the term's span is removed and one glossary option per allowed target
-  is added, so every derivation, and so every n-best entry, translates the span by an allowed target;
+- ``enforce``: every option overlapping the term's span is removed, except phrase options that cover the whole
+  span and already produce an allowed target, and one glossary option per allowed target is added, so every
+  derivation, and so every n-best entry, translates the span by an allowed target;
 - ``prefer``: the glossary options are added beside the model's own, with the ``glossary`` feature;
 - ``off``: nothing (the term is still reported).
 
@@ -87,12 +88,11 @@ class ConstraintApplier:
             start, end = match.token_span.start - offset, match.token_span.end - offset
             if mode is TermMode.OFF or start < 0 or end > len(model_tokens) or not match.allowed_targets:
                 continue
-            options = [self.glossary_option(start, end, [int(i) for i in source_ids[start:end]],
-                                            term_tokens(target, self.target_language),
-                                            f"{match.glossary_name}:{match.entry.origin}")
-                       for target in match.allowed_targets]
+            terms = [term_tokens(target, self.target_language) for target in match.allowed_targets]
+            options = [self.glossary_option(start, end, [int(i) for i in source_ids[start:end]], term,
+                                            f"{match.glossary_name}:{match.entry.origin}") for term in terms]
             if mode is TermMode.ENFORCE:
-                option_set.remove_covering(start, end)
+                option_set.remove_covering(start, end, keep=_carries_term(start, end, terms))
             for option in options:
                 option_set.add(option)
         self.restore_coverage(option_set, model_tokens)
@@ -101,6 +101,17 @@ class ConstraintApplier:
         """Give every word no remaining option can cover its pass-through option back."""
         for position in option_set.uncovered_positions():
             option_set.add(self.builder.identity_option(position, model_tokens[position], OptionKind.PASS_THROUGH))
+
+
+def _carries_term(start: int, end: int, terms: Sequence[TermTokens]):
+    """Whether a phrase option translates the whole span [start, end) with one of the allowed targets: it covers
+    the span and its output holds the target (so "the sync hub" -> "el centro de sincronización" may stay)."""
+    def keep(option: TranslationOption) -> bool:
+        if option.kind is not OptionKind.PHRASE or option.start > start or option.end < end:
+            return False
+        output = [token.lower() for token in option.output_tokens]
+        return any(_contains(output, term.model_tokens) for term in terms)
+    return keep
 
 
 def glossary_positions(placed: Sequence[tuple[TranslationOption, int]]) -> np.ndarray:
