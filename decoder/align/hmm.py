@@ -218,10 +218,7 @@ class HmmTrainer:
             probabilities = workspace.normalise_by_source(np.sum([result.counts for result in results], axis=0))
             jump_counts = np.sum([result.jump_counts for result in results], axis=0)
             parameters = HmmParameters(jump_counts + JUMP_SMOOTHING, self.null_probability)
-            log_likelihood = sum(result.log_likelihood for result in results)
-            tokens = max(sum(result.num_target_tokens for result in results), 1)
-            report = IterationReport(iteration, log_likelihood, float(np.exp(-log_likelihood / tokens)),
-                                     time.perf_counter() - started)
+            report = IterationReport.of(iteration, results, time.perf_counter() - started)
             history.iterations.append(report)
             progress.set_postfix(perplexity=f"{report.perplexity:.2f}")
         return probabilities, parameters, history

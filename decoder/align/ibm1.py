@@ -97,6 +97,13 @@ class IterationReport:
     perplexity: float  # exp(-log_likelihood / target tokens): per-word perplexity of the target side
     seconds: float
 
+    @classmethod
+    def of(cls, iteration: int, results: list[ExpectedCounts], seconds: float) -> IterationReport:
+        """The report of one EM iteration from its shards' E-step results."""
+        log_likelihood = sum(result.log_likelihood for result in results)
+        tokens = max(sum(result.num_target_tokens for result in results), 1)
+        return cls(iteration, log_likelihood, float(np.exp(-log_likelihood / tokens)), seconds)
+
 
 @dataclass(slots=True)
 class TrainingHistory:
@@ -139,10 +146,7 @@ class Ibm1Trainer:
             results = workspace.map_shards(model1_expected_counts, parameters_path)
             counts = np.sum([result.counts for result in results], axis=0)
             probabilities = workspace.normalise_by_source(counts)
-            log_likelihood = sum(result.log_likelihood for result in results)
-            tokens = max(sum(result.num_target_tokens for result in results), 1)
-            report = IterationReport(iteration, log_likelihood, float(np.exp(-log_likelihood / tokens)),
-                                     time.perf_counter() - started)
+            report = IterationReport.of(iteration, results, time.perf_counter() - started)
             history.iterations.append(report)
             progress.set_postfix(perplexity=f"{report.perplexity:.2f}")
         return probabilities, history
