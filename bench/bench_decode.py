@@ -139,7 +139,7 @@ def main() -> None:
         "| model | test set | BLEU (signature) | segments/s | p50 / p95 ms | RSS MiB | workers | machine | commit |",
         "|---|---|---|---|---|---|---|---|---|",
         f"| ui-en-{args.language} | ui-strings test ({len(sources)}) | {bleu.score:.2f} "
-        f"({bleu_metric.get_signature()}) | "
+        f"({str(bleu_metric.get_signature()).replace('|', '&#124;')}) | "
         f"{per_worker[1]:.1f} | {percentile(latencies, 50) * 1000:.0f} / {percentile(latencies, 95) * 1000:.0f} | "
         f"{peak:.0f} | 1 | {machine()} | {commit()} |",
         f"| ui-en-{args.language} | ui-strings test ({len(sources)}) | | {per_worker[2]:.1f} | | | 2 | {machine()} "
