@@ -131,21 +131,8 @@ class GlossaryCatalog:
                         GlossaryInfo(path.stem, "built_in", self._built_in_version(path), None, None, None, None, None),
                     )
         for stored in self.store.list():
-            infos.setdefault(stored.name, self._stored_info(stored))
+            infos.setdefault(stored.name, stored_info(stored))
         return [infos[name] for name in sorted(infos)]
-
-    @staticmethod
-    def _stored_info(stored: StoredGlossary) -> GlossaryInfo:
-        return GlossaryInfo(
-            stored.name,
-            "uploaded",
-            str(stored.version),
-            stored.source_language,
-            stored.target_language,
-            stored.num_entries,
-            stored.created,
-            stored.updated,
-        )
 
     def _remember(self, key: tuple, value: tuple[Glossary, GlossaryInfo]) -> tuple[Glossary, GlossaryInfo]:
         with self._cache_lock:
@@ -201,7 +188,7 @@ class GlossaryCatalog:
             except InvalidGlossaryError as error:  # rows were validated on upload; this is a corrupt store
                 log.error("stored glossary invalid", extra={"event": {"glossary": name, "detail": str(error)}})
                 raise ApiError(500, "glossary_unavailable", f"The stored glossary {name!r} cannot be read.") from error
-            cached = self._remember(("stored", name, stored.version), (glossary, self._stored_info(stored)))
+            cached = self._remember(("stored", name, stored.version), (glossary, stored_info(stored)))
         glossary, info = cached
         if primary_subtag(glossary.source_language) != primary_subtag(source_language) or primary_subtag(
             glossary.target_language
@@ -248,3 +235,17 @@ class GlossaryCatalog:
             return glossary_from_rows(name, rows, source_language, target_language)
         except InvalidGlossaryError as error:
             raise client_glossary_error(error, label) from error
+
+
+def stored_info(stored: StoredGlossary) -> GlossaryInfo:
+    """The API description of an uploaded glossary."""
+    return GlossaryInfo(
+        stored.name,
+        "uploaded",
+        str(stored.version),
+        stored.source_language,
+        stored.target_language,
+        stored.num_entries,
+        stored.created,
+        stored.updated,
+    )

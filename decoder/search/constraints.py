@@ -17,6 +17,7 @@ segment is always translatable.
 
 from __future__ import annotations
 
+import functools
 from collections.abc import Sequence
 from dataclasses import dataclass
 
@@ -37,7 +38,9 @@ class TermTokens:
     output_tokens: tuple[str, ...]
 
 
+@functools.lru_cache(maxsize=8192)
 def term_tokens(text: str, language: str) -> TermTokens:
+    """Cached: the same glossary targets are tokenized for every segment they might apply to."""
     prepared = prepare_segment(text, language)
     return TermTokens(tuple(prepared.model_tokens), tuple(prepared.cased_tokens))
 

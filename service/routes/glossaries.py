@@ -16,7 +16,7 @@ from decoder.errors import InvalidTextError
 from decoder.terminology.matching import find_terms
 from decoder.text.pipeline import prepare_segment
 from service.auth import SCOPE_GLOSSARIES, SCOPE_TRANSLATE
-from service.catalog import GlossaryInfo, check_name, is_valid_name, not_found, rows_of
+from service.catalog import check_name, is_valid_name, not_found, rows_of, stored_info
 from service.context import check_charset, json_body, media_type, requires, services
 from service.errors import ApiError
 from service.schemas import BCP47_TAG, GlossaryUploadSchema, MatchRequestSchema, StrictSchema
@@ -186,22 +186,8 @@ def put_glossary(name: str) -> Response:
             f"processed (now version {error.current}); GET it and decide again.",
         ) from error
     except StoreBusyError as error:
-        raise ApiError(
-            409,
-            "glossary_busy",
-            "Another write to the glossary database is in progress; retry shortly.",
-            headers={"Retry-After": str(services().settings.limits.retry_after_seconds)},
-        ) from error
-    info = GlossaryInfo(
-        stored.name,
-        "uploaded",
-        str(stored.version),
-        stored.source_language,
-        stored.target_language,
-        stored.num_entries,
-        stored.created,
-        stored.updated,
-    )
+        raise _busy() from error
+    info = stored_info(stored)
     g.log_event.update(glossary=name, version=stored.version, num_rows=stored.num_rows)
     response = jsonify(info.as_dict() | {"warnings": _warnings(glossary)})
     response.status_code = 201 if previous == ABSENT else 200
@@ -225,12 +211,7 @@ def delete_glossary(name: str) -> Response:
     except VersionMismatchError as error:
         raise ApiError(412, "precondition_failed", f"Glossary {name!r} changed; GET it again and retry.") from error
     except StoreBusyError as error:
-        raise ApiError(
-            409,
-            "glossary_busy",
-            "Another write to the glossary database is in progress; retry shortly.",
-            headers={"Retry-After": str(services().settings.limits.retry_after_seconds)},
-        ) from error
+        raise _busy() from error
     if not deleted:
         raise not_found(name)
     g.log_event.update(glossary=name)
@@ -280,3 +261,13 @@ def match_glossary(name: str) -> Response:
             )
     g.log_event.update(glossary=name, num_matches=len(matches))
     return jsonify({"glossary": name, "version": info.version, "matches": matches})
+
+
+def _busy() -> ApiError:
+    """409 for a write that could not get the database lock in time; the client may retry."""
+    return ApiError(
+        409,
+        "glossary_busy",
+        "Another write to the glossary database is in progress; retry shortly.",
+        headers={"Retry-After": str(services().settings.limits.retry_after_seconds)},
+    )
