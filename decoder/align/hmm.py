@@ -98,7 +98,7 @@ def _jump_index_matrix(source_length: int) -> npt.NDArray[np.int64]:
 
 
 def hmm_expected_counts(job: ShardJob) -> HmmExpectedCounts:
-    """E-step over one shard: expected emission counts per table key, expected jump counts, log-likelihood.
+    """E-step over one shard: expected emission counts per local row, expected jump counts, log-likelihood.
 
     The matrices are small (2I x 2I): BLAS threads only add synchronisation, so they are limited to one (3x
     faster measured on 2 cores); parallelism comes from running shards in separate processes."""
@@ -109,7 +109,7 @@ def hmm_expected_counts(job: ShardJob) -> HmmExpectedCounts:
 def _hmm_expected_counts(job: ShardJob) -> HmmExpectedCounts:
     layout, parameters = job.layout, job.settings
     assert isinstance(parameters, HmmParameters) and layout.num_null == 1
-    probabilities = np.load(job.parameters_path)  # small and gathered from at random: keep it in memory
+    probabilities = layout.local_parameters(job.parameters_path)  # gathered from at random: keep it in memory
     cells = layout.load_cells()
     posteriors = np.empty(layout.num_cells, dtype=np.float64)
     jump_counts = np.zeros(NUM_JUMPS)
@@ -165,7 +165,7 @@ def hmm_viterbi(job: ShardJob) -> AlignmentArray:
 def _hmm_viterbi(job: ShardJob) -> AlignmentArray:
     layout, parameters = job.layout, job.settings
     assert isinstance(parameters, HmmParameters)
-    probabilities = np.load(job.parameters_path)
+    probabilities = layout.local_parameters(job.parameters_path)
     cells = layout.load_cells()
     per_pair: list[npt.NDArray[np.int32]] = [np.zeros((0, 2), np.int32)] * layout.num_pairs
     for bucket in layout.buckets:
@@ -215,7 +215,7 @@ class HmmTrainer:
             started = time.perf_counter()
             parameters_path = workspace.write_array("hmm-t", probabilities)
             results = workspace.map_shards(hmm_expected_counts, parameters_path, parameters)
-            probabilities = workspace.normalise_by_source(np.sum([result.counts for result in results], axis=0))
+            probabilities = workspace.normalise_by_source(workspace.merge_counts(results))
             jump_counts = np.sum([result.jump_counts for result in results], axis=0)
             parameters = HmmParameters(jump_counts + JUMP_SMOOTHING, self.null_probability)
             report = IterationReport.of(iteration, results, time.perf_counter() - started)

@@ -3,8 +3,10 @@ translation: parameter estimation", section 4.1), trained by EM over integer-id 
 
 p(target | source) = epsilon / (I + 1)^J * prod_j sum_i t(target_j | source_i), with source_0 the NULL word.
 The E-step posterior of cell (i, j) is t(e_j | f_i) / sum_i' t(e_j | f_i'); expected counts are summed per table
-key with one ``np.bincount`` per shard, and the M-step divides by the per-source total. No Python loop runs over
-word pairs: the per-shape buckets of ``decoder.align.layout`` make each step a dense array operation.
+key and the M-step divides by the per-source total. No Python loop runs over word pairs: the E-step is one
+compiled pass over the shard's cells (``decoder.align.kernels``), and ``model1_expected_counts_reference`` is the
+same computation as dense numpy operations over the per-shape buckets of ``decoder.align.layout``, kept as the
+reference that tests compare the kernel with.
 """
 
 from __future__ import annotations
@@ -16,6 +18,7 @@ import numpy as np
 import numpy.typing as npt
 from tqdm.auto import tqdm
 
+from decoder.align.kernels import model1_counts
 from decoder.align.lexical_table import LexicalTable
 from decoder.align.links import AlignmentArray
 from decoder.align.workspace import CellWorkspace, ShardJob
@@ -27,15 +30,24 @@ from decoder.segment_arrays import ParallelArrays
 class ExpectedCounts:
     """The map result of one E-step over one shard."""
 
-    counts: npt.NDArray[np.float64]  # per table key
+    counts: npt.NDArray[np.float64]  # per local row of the shard (see ``CellWorkspace.merge_counts``)
     log_likelihood: float            # natural log, without the constant epsilon
     num_target_tokens: int
 
 
 def model1_expected_counts(job: ShardJob) -> ExpectedCounts:
-    """E-step of Model 1 over one shard: expected link counts per table key and the shard's log-likelihood."""
+    """E-step of Model 1 over one shard: expected link counts per local row and the shard's log-likelihood."""
     layout = job.layout
-    probabilities = np.load(job.parameters_path)  # small and gathered from at random: keep it in memory
+    counts, log_likelihood = model1_counts(layout.load_cells(), layout.width_runs(),
+                                           layout.local_parameters(job.parameters_path))
+    num_tokens = sum(rows for _, _, rows in layout.width_runs())
+    return ExpectedCounts(counts, log_likelihood, num_tokens)
+
+
+def model1_expected_counts_reference(job: ShardJob) -> ExpectedCounts:
+    """``model1_expected_counts`` in plain numpy: gather, row sums and division per run, one ``np.bincount``."""
+    layout = job.layout
+    probabilities = layout.local_parameters(job.parameters_path)
     cells = layout.load_cells()
     posteriors = np.empty(layout.num_cells, dtype=np.float64)
     log_likelihood, num_tokens = 0.0, 0
@@ -56,7 +68,7 @@ def model1_viterbi(job: ShardJob) -> AlignmentArray:
 
     Links are (source position, target position), pairs in shard order."""
     layout = job.layout
-    probabilities = np.load(job.parameters_path, mmap_mode="r")
+    probabilities = layout.local_parameters(job.parameters_path)
     cells = layout.load_cells()
     per_pair: list[npt.NDArray[np.int32]] = [np.zeros((0, 2), np.int32)] * layout.num_pairs
     for bucket in layout.buckets:
@@ -144,8 +156,7 @@ class Ibm1Trainer:
             started = time.perf_counter()
             parameters_path = workspace.write_array("model1-t", probabilities)
             results = workspace.map_shards(model1_expected_counts, parameters_path)
-            counts = np.sum([result.counts for result in results], axis=0)
-            probabilities = workspace.normalise_by_source(counts)
+            probabilities = workspace.normalise_by_source(workspace.merge_counts(results))
             report = IterationReport.of(iteration, results, time.perf_counter() - started)
             history.iterations.append(report)
             progress.set_postfix(perplexity=f"{report.perplexity:.2f}")

@@ -109,11 +109,20 @@ class CellWorkspace:
         np.save(path, array)
         return str(path)
 
+    def jobs(self, parameters_path: str, settings: object = None) -> list[ShardJob]:
+        return [ShardJob(layout, parameters_path, settings) for layout in self.layouts]
+
     def map_shards(
         self, function: Callable[[ShardJob], Result], parameters_path: str, settings: object = None,
     ) -> list[Result]:
-        jobs = [ShardJob(layout, parameters_path, settings) for layout in self.layouts]
-        return self.executor.map(function, jobs)
+        return self.executor.map(function, self.jobs(parameters_path, settings))
+
+    def merge_counts(self, results: list) -> npt.NDArray[np.float64]:
+        """The reduce step of an E-step: per-shard counts over local rows (``results[k].counts``, shards in order)
+        summed into one array over the table's rows."""
+        rows = np.concatenate([layout.load_table_rows() for layout in self.layouts])
+        counts = np.concatenate([result.counts for result in results])
+        return np.bincount(rows, weights=counts, minlength=len(self.table_keys))
 
     def normalise_by_source(self, counts: npt.NDArray[np.float64]) -> npt.NDArray[np.float64]:
         """M-step of the lexical table: t(target | source) = count(source, target) / count(source)."""

@@ -5,10 +5,11 @@ from __future__ import annotations
 import random
 from fractions import Fraction
 
+import numpy as np
 import pytest
 from nltk.translate import AlignedSent, IBMModel1
 
-from decoder.align.ibm1 import Ibm1Trainer
+from decoder.align.ibm1 import Ibm1Trainer, model1_expected_counts, model1_expected_counts_reference
 from decoder.align.workspace import CellWorkspace
 from decoder.executor import LocalProcessExecutor
 
@@ -120,3 +121,24 @@ def test_model1_viterbi_links_each_target_word_to_its_best_source_word():
     # After convergence das-the, Haus-house, Buch-book and ein-a dominate (Koehn 2010, section 4.2.4).
     assert links.link_set(0) == {(0, 0), (1, 1)}
     assert links.link_set(2) == {(0, 0), (1, 1)}
+
+
+@pytest.mark.parametrize(("seed", "smallest_exponent"), [(0, -2), (1, -2), (2, -130), (3, -300)])
+def test_model1_compiled_estep_equals_numpy_reference(seed, smallest_exponent):
+    # the compiled E-step and the plain numpy path compute the same sums in a different order; tiny
+    # probabilities check that the kernel's batched logarithm of row totals neither underflows nor drifts
+    generator = random.Random(seed)
+    words = [f"w{k}" for k in range(30)]
+    pairs = [(" ".join(generator.choices(words, k=generator.randint(1, 9))),
+              " ".join(generator.choices(words, k=generator.randint(1, 9)))) for _ in range(200)]
+    corpus, source_vocabulary, target_vocabulary = encode_pairs(pairs)
+    with CellWorkspace(corpus, len(source_vocabulary), len(target_vocabulary), num_shards=3) as workspace:
+        exponents = np.random.default_rng(seed).uniform(smallest_exponent, 0.0, size=len(workspace.table_keys))
+        probabilities = 10.0 ** exponents
+        path = workspace.write_array("t", probabilities)
+        compiled = [model1_expected_counts(job) for job in workspace.jobs(path)]
+        reference = [model1_expected_counts_reference(job) for job in workspace.jobs(path)]
+        for ours, theirs in zip(compiled, reference):
+            assert ours.log_likelihood == pytest.approx(theirs.log_likelihood, rel=1e-12)
+            assert ours.num_target_tokens == theirs.num_target_tokens
+        np.testing.assert_allclose(workspace.merge_counts(compiled), workspace.merge_counts(reference), rtol=1e-12)
