@@ -6,7 +6,7 @@ BIN := $(VENV)/bin
 STAMP := $(VENV)/.installed
 DEMO_OUT := demo_models/build
 
-.PHONY: demo serve test test-all lint format bench-align bench-train bench-decode bench-terms bench-service clean
+.PHONY: demo serve test test-all lint format bench-align bench-train bench-decode bench-terms bench-tune bench-service clean
 
 $(STAMP): pyproject.toml
 	$(PYTHON) -m venv $(VENV)
@@ -58,6 +58,9 @@ bench-decode: $(STAMP)
 
 bench-terms: $(STAMP)
 	$(BIN)/python bench/bench_terms.py
+
+bench-tune: $(STAMP)
+	$(BIN)/python bench/bench_tune.py
 
 bench-service: $(STAMP)
 	$(BIN)/python bench/bench_service.py

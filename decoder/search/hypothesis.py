@@ -66,19 +66,21 @@ class Hypothesis:
 class ExpansionScorer:
     """Scores appending an option to a hypothesis; the only place the search adds context-dependent features.
 
-    Holds a per-segment cache of LM extensions (state, target phrase) -> (log10 sum, new state)."""
+    Uses a cache of LM extensions (state, target phrase) -> (log10 sum, new state): weight-independent, so one
+    cache may serve many segments and requests (``lm_cache``; a fresh one per scorer by default)."""
 
     __slots__ = ("language_model", "num_words", "_lm_weight", "_distortion_weight", "_prev_weights",
                  "_next_weights", "_lm_cache")
 
-    def __init__(self, language_model: LanguageModel, weights: np.ndarray, num_words: int) -> None:
+    def __init__(self, language_model: LanguageModel, weights: np.ndarray, num_words: int,
+                 lm_cache: dict[tuple[int, tuple[int, ...]], tuple[float, int]] | None = None) -> None:
         self.language_model = language_model
         self.num_words = num_words
         self._lm_weight = float(weights[FEATURE_INDEX["lm"]]) * LN10
         self._distortion_weight = float(weights[FEATURE_INDEX["distortion"]])
         self._prev_weights = tuple(float(weights[index]) for index in _PREV)
         self._next_weights = tuple(float(weights[index]) for index in _NEXT)
-        self._lm_cache: dict[tuple[int, tuple[int, ...]], tuple[float, int]] = {}
+        self._lm_cache = lm_cache if lm_cache is not None else {}
 
     def lm_extend(self, state: int, target_ids: tuple[int, ...]) -> tuple[float, int]:
         """(summed log10 probability of the words after ``state``, new state), cached per segment."""
@@ -95,13 +97,16 @@ class ExpansionScorer:
 
     def expand(self, hypothesis: Hypothesis, option: TranslationOption) -> tuple[float, int]:
         """(score of the new hypothesis, its LM state). Adds the end-of-segment scores when it completes."""
-        score = hypothesis.score + option.static_score
-        score -= self._distortion_weight * abs(option.start - hypothesis.last_end)
-        kind = orientation(hypothesis.last_start, hypothesis.last_end, option.start, option.end)
+        start, last_end = option.start, hypothesis.last_end
+        score = hypothesis.score + option.static_score - self._distortion_weight * abs(start - last_end)
+        # orientation(), inlined: this is the decoder's innermost call
+        kind = MONOTONE if start == last_end else SWAP if option.end == hypothesis.last_start else DISCONTINUOUS
         score += self._prev_weights[kind] * option.reordering[kind]
-        if hypothesis.last_option is not None:
-            score += self._next_weights[kind] * hypothesis.last_option.reordering[3 + kind]
-        log10_total, state = self.lm_extend(hypothesis.lm_state, option.target_ids)
+        last_option = hypothesis.last_option
+        if last_option is not None:
+            score += self._next_weights[kind] * last_option.reordering[3 + kind]
+        cached = self._lm_cache.get((hypothesis.lm_state, option.target_ids))
+        log10_total, state = cached if cached is not None else self.lm_extend(hypothesis.lm_state, option.target_ids)
         score += self._lm_weight * log10_total
         if hypothesis.num_covered + option.length == self.num_words:
             score += self._lm_weight * self.lm_extend(state, (SENTENCE_END_ID,))[0]

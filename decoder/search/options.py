@@ -152,11 +152,11 @@ class OptionBuilder:
 
     def phrase_option(self, start: int, end: int, row: int) -> TranslationOption:
         table = self.phrase_table
-        target_ids = [int(token) for token in table.target_phrase(row)]
+        target_ids = table.target_phrase(row).tolist()  # plain ints: element access to a mapped array is slow
         features = self.base_features(len(target_ids))
         features[list(_SCORE_FEATURES)] = table.scores[row]
         return self.make(start, end, target_ids, self.target_vocabulary.decode(target_ids), features,
-                         table.reordering[row], table.alignment(row).tolist(), OptionKind.PHRASE, int(row))
+                         table.reordering[row].tolist(), table.alignment(row).tolist(), OptionKind.PHRASE, int(row))
 
     def collect(self, model_tokens: Sequence[str], max_options_per_span: int, max_phrase_length: int) -> OptionSet:
         """Options for every span of a segment (model tokens: lowercased, protected as class tokens)."""

@@ -106,13 +106,15 @@ class StackSearch:
         limit = self.settings.distortion_limit
         if limit < 0:
             return True
-        if abs(start - hypothesis.last_end) > limit:
-            return False
-        coverage = hypothesis.coverage | ((1 << end) - (1 << start))
+        return abs(start - hypothesis.last_end) <= limit and self._gap_reachable(hypothesis.coverage, start, end)
+
+    def _gap_reachable(self, coverage: int, start: int, end: int) -> bool:
+        """Whether the first word left uncovered after adding [start, end) stays within the distortion limit."""
+        coverage |= (1 << end) - (1 << start)
         if coverage == self.full_coverage:
             return True
         first_gap = (~coverage & (coverage + 1)).bit_length() - 1
-        return not (first_gap < start and end - first_gap > limit)
+        return not (first_gap < start and end - first_gap > self.settings.distortion_limit)
 
     def _is_free(self, coverage: int, start: int, end: int) -> bool:
         return not coverage & ((1 << end) - (1 << start))
@@ -178,6 +180,7 @@ class StackSearch:
         survivors: list[list[Hypothesis] | None] = [None] * (self.num_words + 1)
         survivors[0] = stacks[0].pruned(self.settings.stack_size)
         max_length = max((end - start for start, end in self.options.by_span), default=1)
+        limit = self.settings.distortion_limit
         for size in range(1, self.num_words + 1):
             grids: list[tuple[list[Hypothesis], list[TranslationOption]]] = []
             for length in range(1, min(max_length, size) + 1):
@@ -187,10 +190,15 @@ class StackSearch:
                 for group in groups.values():
                     group.sort(key=lambda hypothesis: -hypothesis.score)
                     # spans free for the coverage; the distortion limit depends on each hypothesis's last end
+                    coverage = group[0].coverage
                     for start, end, options in self._free_spans(group[0], length, check_distortion=False):
-                        allowed = [h for h in group if self._span_allowed(h, start, end)]
-                        if allowed:
-                            grids.append((allowed, options))
+                        if limit < 0:
+                            grids.append((group, options))
+                        elif self._gap_reachable(coverage, start, end):
+                            # the rest of the check depends only on each hypothesis's last end
+                            allowed = [h for h in group if -limit <= start - h.last_end <= limit]
+                            if allowed:
+                                grids.append((allowed, options))
             queue = _CubeQueue(self, grids)
             stack, limit = stacks[size], self.settings.stack_size
             kept_totals: list[float] = []  # min-heap of the best ``stack_size`` totals popped so far

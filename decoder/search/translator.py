@@ -33,6 +33,7 @@ from decoder.text.pipeline import PreparedSegment, prepare_segment
 from decoder.text.protection import restore
 from decoder.translation_model import TranslationModel
 
+LM_CACHE_ENTRIES = 200_000  # about 40 MB per process at most
 SPLIT_TOKENS = frozenset({".", "!", "?", ";", ":", ","})  # sentence first, then clause punctuation
 
 
@@ -60,6 +61,9 @@ class Translator:
 
     def __init__(self, model: TranslationModel) -> None:
         self.model = model
+        # LM extensions (state, target phrase) -> (log10 sum, state), shared by all segments; emptied when full.
+        # A race between threads only recomputes an entry: every value for a key is the same.
+        self._lm_cache: dict[tuple[int, tuple[int, ...]], tuple[float, int]] = {}
 
     def builder(self, weights: np.ndarray) -> OptionBuilder:
         model = self.model
@@ -84,7 +88,9 @@ class Translator:
 
     def search_piece(self, option_set: OptionSet, options: TranslationOptions, weights: np.ndarray,
                      forced_target: Sequence[int] | None = None) -> SearchResult:
-        scorer = ExpansionScorer(self.model.language_model, weights, option_set.num_words)
+        if len(self._lm_cache) > LM_CACHE_ENTRIES:
+            self._lm_cache = {}
+        scorer = ExpansionScorer(self.model.language_model, weights, option_set.num_words, self._lm_cache)
         search = StackSearch(option_set, scorer, options.search, keep_arcs=options.n_best > 1,
                              forced_target=forced_target)
         return search.run()
