@@ -41,6 +41,8 @@ def percentile(values: list[float], share: float) -> float:
 
 
 def timed_translations(translator: Translator, segments: list[str], search: SearchSettings):
+    """Per-segment outputs, best scores and latencies, from an empty LM-extension cache (fair across settings)."""
+    translator.clear_caches()
     options = TranslationOptions(search=search)
     outputs, scores, latencies = [], [], []
     for segment in segments:
@@ -53,6 +55,7 @@ def timed_translations(translator: Translator, segments: list[str], search: Sear
 
 
 def throughput(translator: Translator, segments: list[str], workers: int) -> tuple[float, list[str]]:
+    translator.clear_caches()  # the workers fork from this process: none starts with a warm cache
     use_translator(translator)
     executor = make_executor(workers)
     try:

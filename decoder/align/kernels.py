@@ -40,13 +40,22 @@ def _model1_runs(cells, widths, starts, num_rows, table):  # pragma: no cover - 
     return log_likelihood + np.log(product)
 
 
+@njit(cache=True, nogil=True)
+def _gather_parameters(probabilities, table_rows, table):  # pragma: no cover - compiled
+    for local in range(len(table_rows)):
+        table[local, 0] = probabilities[table_rows[local]]
+        table[local, 1] = 0.0
+
+
 def model1_counts(
     cells: npt.NDArray[np.int32], runs: list[tuple[int, int, int]], probabilities: npt.NDArray[np.float64],
+    table_rows: npt.NDArray[np.int32],
 ) -> tuple[npt.NDArray[np.float64], float]:
-    """Model 1 E-step over (width, start, rows) runs of cells: expected counts per row of ``probabilities`` and the
-    log-likelihood sum_j log sum_i t(e_j | f_i) - J log(I + 1)."""
-    table = np.zeros((len(probabilities), 2))
-    table[:, 0] = probabilities
+    """Model 1 E-step over (width, start, rows) runs of cells, whose local row k is row ``table_rows[k]`` of
+    ``probabilities``: expected counts per local row and the log-likelihood
+    sum_j log sum_i t(e_j | f_i) - J log(I + 1)."""
+    table = np.empty((len(table_rows), 2))
+    _gather_parameters(probabilities, table_rows, table)
     run_array = np.array(runs, dtype=np.int64).reshape(-1, 3)
     log_likelihood = _model1_runs(cells, run_array[:, 0], run_array[:, 1], run_array[:, 2], table)
     return np.ascontiguousarray(table[:, 1]), float(log_likelihood)

@@ -65,6 +65,10 @@ class Translator:
         # A race between threads only recomputes an entry: every value for a key is the same.
         self._lm_cache: dict[tuple[int, tuple[int, ...]], tuple[float, int]] = {}
 
+    def clear_caches(self) -> None:
+        """Forget cached LM extensions (e.g. to time settings from the same cold start)."""
+        self._lm_cache = {}
+
     def builder(self, weights: np.ndarray) -> OptionBuilder:
         model = self.model
         return OptionBuilder(model.phrase_table, model.language_model, model.source_vocabulary,
