@@ -39,9 +39,9 @@ def model1_expected_counts(job: ShardJob) -> ExpectedCounts:
     """E-step of Model 1 over one shard: expected link counts per local row and the shard's log-likelihood."""
     layout = job.layout
     probabilities = np.asarray(np.load(job.parameters_path, mmap_mode="r"))
-    counts, log_likelihood = model1_counts(layout.load_cells(), layout.width_runs(), probabilities,
-                                           layout.load_table_rows())
-    num_tokens = sum(rows for _, _, rows in layout.width_runs())
+    runs = layout.width_runs()
+    counts, log_likelihood = model1_counts(layout.load_cells(), runs, probabilities, layout.load_table_rows())
+    num_tokens = sum(rows for _, _, rows in runs)
     return ExpectedCounts(counts, log_likelihood, num_tokens)
 
 

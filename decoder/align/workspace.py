@@ -80,6 +80,7 @@ class CellWorkspace:
         self.num_pairs = len(corpus)
         self.directory = Path(tempfile.mkdtemp(prefix="phrasework-align-", dir=parent_dir))
         self._version = 0
+        self._merged_rows: npt.NDArray[np.int32] | None = None
         if num_shards is None:
             workers = self.executor.num_workers
             total_cells = int(((corpus.source.lengths + self.num_null) * corpus.target.lengths).sum())
@@ -120,9 +121,10 @@ class CellWorkspace:
     def merge_counts(self, results: list) -> npt.NDArray[np.float64]:
         """The reduce step of an E-step: per-shard counts over local rows (``results[k].counts``, shards in order)
         summed into one array over the table's rows."""
-        rows = np.concatenate([layout.load_table_rows() for layout in self.layouts])
+        if self._merged_rows is None:  # the same every iteration: read the shards' maps once
+            self._merged_rows = np.concatenate([layout.load_table_rows() for layout in self.layouts])
         counts = np.concatenate([result.counts for result in results])
-        return np.bincount(rows, weights=counts, minlength=len(self.table_keys))
+        return np.bincount(self._merged_rows, weights=counts, minlength=len(self.table_keys))
 
     def normalise_by_source(self, counts: npt.NDArray[np.float64]) -> npt.NDArray[np.float64]:
         """M-step of the lexical table: t(target | source) = count(source, target) / count(source)."""

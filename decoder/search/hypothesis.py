@@ -83,7 +83,7 @@ class ExpansionScorer:
         self._lm_cache = lm_cache if lm_cache is not None else {}
 
     def lm_extend(self, state: int, target_ids: tuple[int, ...]) -> tuple[float, int]:
-        """(summed log10 probability of the words after ``state``, new state), cached per segment."""
+        """(summed log10 probability of the words after ``state``, new state), through the scorer's cache."""
         key = (state, target_ids)
         cached = self._lm_cache.get(key)
         if cached is None:
