@@ -5,8 +5,14 @@ For each term the matcher found (``decoder.terminology``), by its mode (the entr
 - ``enforce``: every option overlapping the term's span is removed, except phrase options that cover the whole
   span and already produce an allowed target, and one glossary option per allowed target is added, so every
   derivation, and so every n-best entry, translates the span by an allowed target;
-- ``prefer``: the glossary options are added beside the model's own, with the ``glossary`` feature;
+- ``prefer``: the glossary options are added beside the model's own, and the model may choose otherwise;
 - ``off``: nothing (the term is still reported).
+
+The ``glossary`` feature counts the terms an option translates by an allowed target: a glossary option, and
+equally a phrase option that covers the whole span and already produces the target. So the weight rewards the
+term, not the way it is reached: a longer phrase that carries the term ("security level" -> "niveau de
+sécurité") competes with the word-by-word glossary options on its own merits, and under enforce every
+derivation earns the same count.
 
 A glossary option takes its phrase features and orientation probabilities from the phrase table when the pair
 is there, neutral values (log 1, uniform orientations) otherwise; the LM scores it in context like any option.
@@ -17,6 +23,7 @@ segment is always translatable.
 
 from __future__ import annotations
 
+import dataclasses
 import functools
 from collections.abc import Sequence
 from dataclasses import dataclass
@@ -94,11 +101,31 @@ class ConstraintApplier:
             terms = [term_tokens(target, self.target_language) for target in match.allowed_targets]
             options = [self.glossary_option(start, end, [int(i) for i in source_ids[start:end]], term,
                                             f"{match.glossary_name}:{match.entry.origin}") for term in terms]
+            carries = _carries_term(start, end, terms)
             if mode is TermMode.ENFORCE:
-                option_set.remove_covering(start, end, keep=_carries_term(start, end, terms))
+                option_set.remove_covering(start, end, keep=carries)
+            self.credit_term(option_set, start, end, carries)
             for option in options:
-                option_set.add(option)
+                option_set.replace_translation(option)
         self.restore_coverage(option_set, model_tokens)
+
+    def credit_term(self, option_set: OptionSet, start: int, end: int, carries) -> None:
+        """Count the term in the ``glossary`` feature of every phrase option that carries it."""
+        glossary_weight = float(self.builder.weights[FEATURE_INDEX["glossary"]])
+        for span, span_options in option_set.by_span.items():
+            if span[0] > start or span[1] < end:
+                continue
+            credited = []
+            for option in span_options:
+                if carries(option):
+                    features = option.static_features.copy()
+                    features[FEATURE_INDEX["glossary"]] += 1.0
+                    option = dataclasses.replace(option, static_features=features,
+                                                 static_score=option.static_score + glossary_weight,
+                                                 estimate=option.estimate + glossary_weight)
+                credited.append(option)
+            credited.sort(key=lambda item: -item.estimate)
+            option_set.by_span[span] = credited
 
     def restore_coverage(self, option_set: OptionSet, model_tokens: Sequence[str]) -> None:
         """Give every word no remaining option can cover its pass-through option back."""

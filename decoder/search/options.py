@@ -83,6 +83,14 @@ class OptionSet:
         options.append(option)
         options.sort(key=lambda item: -item.estimate)
 
+    def replace_translation(self, option: TranslationOption) -> None:
+        """Add ``option`` in place of any phrase option with the same span and target (a glossary option that
+        the phrase table also has: the glossary's casing wins, and the search sees the pair once)."""
+        span = (option.start, option.end)
+        self.by_span[span] = [other for other in self.by_span.get(span, [])
+                              if other.kind is not OptionKind.PHRASE or other.target_ids != option.target_ids]
+        self.add(option)
+
     def remove_covering(self, start: int, end: int, keep: Callable[[TranslationOption], bool] | None = None) -> None:
         """Remove every option that overlaps [start, end) (unless ``keep`` says otherwise)."""
         for span in list(self.by_span):

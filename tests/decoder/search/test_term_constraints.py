@@ -42,6 +42,24 @@ def test_every_n_best_entry_satisfies_enforced_terms_and_never_shows_forbidden_o
                     assert not find_in_output(entry.text, text, False), (entry.text, text)
 
 
+def test_glossary_feature_counts_terms_however_they_are_translated(demo_translator, demo_glossary):
+    # The glossary feature counts translated terms, not glossary options: a phrase option that already carries
+    # the target earns it too. So under enforce every n-best entry, however it segments the source, has one count
+    # per applied term, and the weight cannot favour splitting a phrase into word-by-word glossary options.
+    segments = ["Open the sync hub and click Save.", "Open the dashboard, then the settings.",
+                "Brelqua stores the backup in your workspace."]
+    options = TranslationOptions(n_best=10, glossaries=(demo_glossary,), term_mode="enforce", distinct_n_best=False)
+    for result in demo_translator.translate(segments, options):
+        applied = sum(item.reason is None for item in result.terms)
+        assert applied >= 1 and len(result.n_best) > 1
+        assert {entry.features["glossary"] for entry in result.n_best} == {float(applied)}
+    def translations(weight):
+        weighted = TranslationOptions(glossaries=(demo_glossary,), term_mode="enforce", weights={"glossary": weight})
+        return [result.translation for result in demo_translator.translate(segments, weighted)]
+    for weight in (-5.0, 50.0):
+        assert translations(weight) == translations(1.0)  # a constant count: the weight cannot change the choice
+
+
 def test_prefer_adds_options_that_the_glossary_weight_can_choose(demo_translator):
     # An inline term the model has never seen: under prefer, a large glossary weight makes the model use it,
     # a large negative one makes it avoid it; under enforce it is used whatever the weight.
