@@ -192,7 +192,10 @@ class TermReportSchema(Schema):
     origin = fields.String(required=True, metadata={"description": "where the entry is defined"})
     mode = fields.String(required=True, validate=validate.OneOf([mode.value for mode in TermMode]))
     target = fields.String(required=True, allow_none=True)
-    in_output = fields.Boolean(required=True)
+    in_output = fields.Boolean(
+        required=True, metadata={"description": "an allowed target is in the output (under mode off too: produced "
+                                                "by the model on its own)"}
+    )
     output_span = fields.List(fields.Integer(), required=True, allow_none=True)
     reason = fields.String(
         required=True, allow_none=True, metadata={"description": "null when the term was applied, else why not"}

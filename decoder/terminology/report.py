@@ -141,16 +141,15 @@ def build_term_report(
 
     ``default_mode`` is the request's mode (an entry's own mode wins). ``targets_used[k]``, if given, is the
     target the decoder used for ``result.matches[k]`` (None if it used none); only that target is then looked
-    for. Without it, any allowed target counts."""
+    for. Without it, any allowed target counts. A term under mode off is still looked for (any allowed target),
+    so the report shows where the model produced it on its own; its reason stays ``mode_off``: not applied."""
     matches = result.matches
     if targets_used is not None and len(targets_used) != len(matches):
         raise ValueError(f"{len(targets_used)} targets_used for {len(matches)} matches; give one per match")
     modes = [match.mode or default_mode for match in matches]
     wanted: list[tuple[str, ...]] = []
     for number, (match, mode) in enumerate(zip(matches, modes)):
-        if mode is TermMode.OFF:
-            wanted.append(())
-        elif targets_used is not None:
+        if targets_used is not None and mode is not TermMode.OFF:
             used = targets_used[number]
             wanted.append((used,) if used is not None else ())
         else:

@@ -106,9 +106,15 @@ def test_mode_off_and_entry_modes(demo):
     result = match_terms(prepare_segment("Open the dashboard and the trash.", "en"), [terms])
     report = build_term_report(result, "Abra el panel de control y la papelera.", TermMode.PREFER)
     assert [(item.mode, item.reason, item.target) for item in report.items] == [
-        (TermMode.OFF, TermReason.MODE_OFF, None),  # the entry's own mode wins over the request's
+        # the entry's own mode wins over the request's; under off the term is not applied, but the report
+        # still says where the model produced it on its own
+        (TermMode.OFF, TermReason.MODE_OFF, "panel de control"),
         (TermMode.PREFER, None, "papelera"),
     ]
+    assert [(item.in_output, item.output_span) for item in report.items] == [(True, Span(8, 24)), (True, Span(30, 38))]
+    missing = build_term_report(result, "Abra el tablero y la papelera.", TermMode.PREFER).items[0]
+    assert (missing.reason, missing.target, missing.in_output, missing.output_span) == (
+        TermReason.MODE_OFF, None, False, None)
 
 
 def test_conflicts_appear_in_source_order_with_their_reason():
