@@ -25,7 +25,7 @@ from __future__ import annotations
 
 import dataclasses
 import functools
-from collections.abc import Sequence
+from collections.abc import Callable, Sequence
 from dataclasses import dataclass
 
 import numpy as np
@@ -109,7 +109,8 @@ class ConstraintApplier:
                 option_set.replace_translation(option)
         self.restore_coverage(option_set, model_tokens)
 
-    def credit_term(self, option_set: OptionSet, start: int, end: int, carries) -> None:
+    def credit_term(self, option_set: OptionSet, start: int, end: int,
+                    carries: Callable[[TranslationOption], bool]) -> None:
         """Count the term in the ``glossary`` feature of every phrase option that carries it."""
         glossary_weight = float(self.builder.weights[FEATURE_INDEX["glossary"]])
         for span, span_options in option_set.by_span.items():
@@ -133,7 +134,7 @@ class ConstraintApplier:
             option_set.add(self.builder.identity_option(position, model_tokens[position], OptionKind.PASS_THROUGH))
 
 
-def _carries_term(start: int, end: int, terms: Sequence[TermTokens]):
+def _carries_term(start: int, end: int, terms: Sequence[TermTokens]) -> Callable[[TranslationOption], bool]:
     """Whether a phrase option translates the whole span [start, end) with one of the allowed targets: it covers
     the span and its output holds the target (so "the sync hub" -> "el centro de sincronización" may stay)."""
     def keep(option: TranslationOption) -> bool:
