@@ -6,6 +6,10 @@ the whole pool gives w_{t+1}. The loop stops when a decode adds no new entry to 
 the same data again), when dev BLEU gains less than ``min_gain`` over the previous iteration, or after
 ``max_iterations`` decodes. The result keeps the weights of the best dev iteration, not the last ones.
 
+The optimiser's weights (L1 norm 1) are decoded in the initial weights' units (``weights.in_initial_units``):
+the same 1-best on the pool, but the search's absolute beam margin keeps its meaning, and features the dev set
+never exercises (``glossary`` without a glossary) keep their initial weights.
+
 The optimiser of iteration t is seeded with ``SeedSequence([seed, t])``: one seed reproduces the whole run.
 """
 
@@ -26,7 +30,7 @@ from decoder.tuning.bleu_statistics import ReferenceSet, Tokens, corpus_bleu
 from decoder.tuning.mert import MertSettings, optimise_mert
 from decoder.tuning.n_best_pool import DecodeFunction, NBestPool
 from decoder.tuning.pro import ProSettings, optimise_pro
-from decoder.tuning.weights import OptimiserResult
+from decoder.tuning.weights import OptimiserResult, in_initial_units, varying_features
 
 METHODS = ("mert", "pro")
 STOP_NO_NEW_HYPOTHESES = "no_new_hypotheses"
@@ -101,7 +105,7 @@ def tune(
 
     Returns the whole history and the best iteration (see the module docstring for the stopping rules)."""
     feature_names = tuple(feature_names)
-    weights = _read_only(initial_weights)
+    weights = initial = _read_only(initial_weights)
     settings = _check_settings(method, max_iterations, n_best, min_gain, feature_names, weights, optimiser_settings)
     reference_set = ReferenceSet(references)
     pool = NBestPool(reference_set, feature_names)
@@ -133,7 +137,9 @@ def tune(
             bar.update(1)
             if stop_reason:
                 break
-            weights = _read_only(optimised.weights)
+            arrays = pool.arrays()
+            weights = _read_only(in_initial_units(optimised.weights, initial,
+                                                  varying_features(arrays.features, arrays.offsets)))
     finally:
         bar.close()
     best_iteration = int(np.argmax([record.dev_bleu for record in history]))

@@ -2,6 +2,14 @@
 
 The 1-best under ``weights`` is unchanged by any positive scaling, so the optimisers report weights at L1 norm 1
 (sum of absolute values); signs are never constrained.
+
+The decoder's search is not scale-free, though: its beam threshold is an absolute score margin, and a feature
+that never varies on the dev set (``glossary`` when the dev set is decoded without a glossary) gets no
+information from tuning, so PRO shrinks it to 0 and MERT keeps only its share of the L1 norm.
+``in_initial_units`` therefore brings the optimiser's weights back to the units the search was set up for:
+features that vary in the pool are rescaled to the initial weights' L1 norm over them, and the others keep
+their initial weights. Within one segment's entries the inactive features are constant, so the 1-best of every
+pool segment, and with it the pool BLEU, is exactly the optimiser's.
 """
 
 from __future__ import annotations
@@ -17,6 +25,35 @@ def normalise_l1(weights: npt.ArrayLike) -> npt.NDArray[np.float64]:
     weights = np.array(weights, dtype=np.float64)
     norm = np.abs(weights).sum()
     return weights / norm if norm > 0 else weights
+
+
+def varying_features(features: npt.ArrayLike, offsets: npt.ArrayLike) -> npt.NDArray[np.bool_]:
+    """Which features (columns) differ between the entries of at least one segment (rows offsets[k]:offsets[k+1])."""
+    features = np.asarray(features, dtype=np.float64)
+    offsets = np.asarray(offsets, dtype=np.int64)
+    varying = np.zeros(features.shape[1], dtype=bool)
+    for start, end in zip(offsets[:-1], offsets[1:]):
+        if end - start > 1:
+            block = features[start:end]
+            varying |= (block != block[0]).any(axis=0)
+    return varying
+
+
+def in_initial_units(
+    weights: npt.ArrayLike, initial: npt.ArrayLike, varying: npt.ArrayLike,
+) -> npt.NDArray[np.float64]:
+    """``weights`` on the varying features, scaled to ``initial``'s L1 norm over them; ``initial`` elsewhere.
+
+    If either norm over the varying features is 0 (nothing to scale by), ``weights`` come back unchanged."""
+    weights = np.array(weights, dtype=np.float64)
+    initial = np.asarray(initial, dtype=np.float64)
+    varying = np.asarray(varying, dtype=bool)
+    tuned_norm, initial_norm = np.abs(weights[varying]).sum(), np.abs(initial[varying]).sum()
+    if tuned_norm == 0 or initial_norm == 0:
+        return weights
+    result = initial.copy()
+    result[varying] = weights[varying] * (initial_norm / tuned_norm)
+    return result
 
 
 @dataclass(frozen=True, slots=True)

@@ -233,3 +233,36 @@ def test_bad_settings_and_bad_decoder_output_are_refused():
 
     with pytest.raises(NBestFormatError, match="2 n-best lists for 3 dev segments"):
         tune(short_decoder, decoder.references, FEATURE_NAMES, BAD_WEIGHTS, progress=False)
+
+
+class DecoderWithIdleFeature(CandidateDecoder):
+    """Like CandidateDecoder, with a fifth feature that is 0 on every entry (``glossary`` on a dev set decoded
+    without a glossary): tuning can learn nothing about it."""
+
+    def __init__(self):
+        super().__init__()
+        self.candidates = [[(tokens, np.append(features, 0.0)) for tokens, features in segment]
+                           for segment in self.candidates]
+
+
+@pytest.mark.parametrize("method", ["mert", "pro"])
+def test_tuned_weights_stay_in_the_initial_units(method):
+    # The search's beam margin is absolute, so weights are decoded at the initial scale (the 1-best on the pool is
+    # scale-free: any positive factor gives the same ranking), and an idle feature keeps its initial weight
+    # instead of PRO's shrinkage to 0 or a share of MERT's L1 norm.
+    decoder = DecoderWithIdleFeature()
+    initial = np.append(BAD_WEIGHTS, 0.7)
+    result = tune(decoder, decoder.references, (*FEATURE_NAMES, "idle"), initial, method=method, n_best=3,
+                  max_iterations=3, progress=False, min_gain=-1.0,
+                  optimiser_settings=FAST_MERT if method == "mert" else None)
+    assert len(result.history) == 3
+    for record in result.history[1:]:
+        assert record.weights[4] == 0.7
+        assert np.abs(record.weights[:4]).sum() == pytest.approx(np.abs(BAD_WEIGHTS).sum(), abs=1e-12)
+    assert not np.array_equal(result.history[1].weights[:4], BAD_WEIGHTS)  # tuning did move the others
+    # The optimiser's pool BLEU after the first decode (top 3 per segment under the initial weights) is exactly
+    # the sacrebleu BLEU of the rescaled weights' 1-best among those pool entries: rescaling lost nothing.
+    weights = result.history[1].weights
+    pool = [ranked[:3] for ranked in decoder.ranked(initial)]
+    one_best = [max(entries, key=lambda entry: entry[1] @ weights)[0] for entries in pool]
+    assert result.history[0].pool_bleu == pytest.approx(decoder.reference_bleu(one_best), abs=1e-12)
