@@ -31,12 +31,8 @@ def varying_features(features: npt.ArrayLike, offsets: npt.ArrayLike) -> npt.NDA
     """Which features (columns) differ between the entries of at least one segment (rows offsets[k]:offsets[k+1])."""
     features = np.asarray(features, dtype=np.float64)
     offsets = np.asarray(offsets, dtype=np.int64)
-    varying = np.zeros(features.shape[1], dtype=bool)
-    for start, end in zip(offsets[:-1], offsets[1:]):
-        if end - start > 1:
-            block = features[start:end]
-            varying |= (block != block[0]).any(axis=0)
-    return varying
+    first_of_segment = np.repeat(offsets[:-1], np.diff(offsets))  # each row's segment's first row
+    return (features != features[first_of_segment]).any(axis=0)
 
 
 def in_initial_units(
